@@ -55,6 +55,8 @@ export const partInputSchema = z.object({
   reversible: z.boolean().default(false),
   clearApertureMm: mm(500).optional(),
   weightG: mm(100000).optional(),
+  /** The maker's list price, in cents (shops set their own prices in their inventory). */
+  listPriceCents: z.number().int().min(0).max(100_000_000).optional(),
   specs: partSpecsSchema.default({}),
 }).superRefine((p, ctx) => {
   const need = (field: keyof PartSpecs, why: string) => {
