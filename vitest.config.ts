@@ -10,9 +10,9 @@ export default defineConfig({
     projects: [
       { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts", "tests/reference/**/*.test.ts"], environment: "node" } },
       { resolve: { alias }, test: { name: "integration", include: ["tests/integration/**/*.test.ts"], environment: "node",
-          globalSetup: ["tests/support/global-setup.ts"], fileParallelism: false, testTimeout: 60_000, hookTimeout: 120_000 } },
+          fileParallelism: false, testTimeout: 60_000, hookTimeout: 120_000 } },
       { resolve: { alias }, test: { name: "e2e", include: ["tests/e2e/**/*.spec.ts"], environment: "node",
-          globalSetup: ["tests/support/global-setup.ts"], fileParallelism: false, testTimeout: 120_000, hookTimeout: 300_000 } },
+          fileParallelism: false, testTimeout: 120_000, hookTimeout: 300_000 } },
     ],
   },
 });

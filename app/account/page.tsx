@@ -1,0 +1,45 @@
+import Link from "next/link";
+import { redirect } from "next/navigation";
+import { SignOutButton } from "@/components/account/sign-out-button";
+import { Card, PageTitle } from "@/components/ui/card";
+import { getSessionUser } from "@/lib/auth/session";
+
+export const metadata = { title: "Account" };
+export const dynamic = "force-dynamic";
+
+const ROLE_WORDS = {
+  member: "You can plan, save builds, keep a gear list and submit missing parts.",
+  moderator: "You can also review submitted parts, endorse reference builds and hide builds.",
+  admin: "You can do everything a moderator can, and manage accounts.",
+} as const;
+
+export default async function AccountPage() {
+  const user = await getSessionUser();
+  if (!user) redirect("/sign-in?next=/account");
+  return (
+    <div className="max-w-3xl">
+      <PageTitle title="Your account" lead={`${user.name} · ${user.email}`}><SignOutButton /></PageTitle>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Card>
+          <h2 className="font-medium text-ink">Role: <span className="capitalize">{user.role}</span></h2>
+          <p className="mt-1 text-sm text-muted">{ROLE_WORDS[user.role]}</p>
+        </Card>
+        <Card>
+          <h2 className="font-medium text-ink">Your gear</h2>
+          <p className="mt-1 text-sm text-muted">Mark the parts you own; the planner counts them as free and lists only what is still to buy.</p>
+          <Link href="/account/gear" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">Edit my gear</Link>
+        </Card>
+        <Card>
+          <h2 className="font-medium text-ink">Your builds</h2>
+          <p className="mt-1 text-sm text-muted">Trains you saved as links.</p>
+          <Link href="/builds?mine=1" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">See my builds</Link>
+        </Card>
+        <Card>
+          <h2 className="font-medium text-ink">Submit a missing part</h2>
+          <p className="mt-1 text-sm text-muted">Send its numbers and a spec sheet; a moderator checks it before it joins the catalog.</p>
+          <Link href="/parts/submit" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">Submit a part</Link>
+        </Card>
+      </div>
+    </div>
+  );
+}

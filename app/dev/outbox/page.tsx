@@ -1,0 +1,36 @@
+import { notFound } from "next/navigation";
+import { listOutboxMessages } from "@/db/queries/outbox";
+import { PageTitle } from "@/components/ui/card";
+import { isMailFake } from "@/lib/mail";
+
+export const metadata = { title: "Local outbox" };
+export const dynamic = "force-dynamic";
+
+function linkify(text: string) {
+  return text.split(/(https?:\/\/\S+)/g).map((part, i) =>
+    /^https?:\/\//.test(part) ? <a key={i} href={part} className="break-all underline decoration-brass underline-offset-2">{part}</a> : <span key={i}>{part}</span>);
+}
+
+export default async function OutboxPage() {
+  if (!isMailFake()) notFound();
+  const messages = await listOutboxMessages({ limit: 100 });
+  return (
+    <div className="max-w-4xl">
+      <PageTitle title="Local outbox" lead="Mail sent by this copy of Trainyard stays here instead of leaving the machine. Newest first." />
+      {messages.length === 0 ? <p className="text-muted">No messages yet.</p> : (
+        <ol className="space-y-3">
+          {messages.map((m, i) => (
+            <li key={i} className="rounded-lg border border-line bg-surface p-4">
+              <div className="flex flex-wrap justify-between gap-2 text-sm">
+                <span className="font-medium text-ink">{m.subject}</span>
+                <time className="num text-muted" dateTime={m.createdAt.toISOString()}>{m.createdAt.toISOString().replace("T", " ").slice(0, 19)} UTC</time>
+              </div>
+              <div className="text-sm text-muted">to {m.to}</div>
+              <p className="mt-2 whitespace-pre-wrap text-sm">{linkify(m.text ?? "")}</p>
+            </li>
+          ))}
+        </ol>
+      )}
+    </div>
+  );
+}

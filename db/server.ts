@@ -1,0 +1,124 @@
+// Starts Debian's PostgreSQL for this checkout: cluster in .data/postgres, 127.0.0.1 only,
+// run as the `postgres` user when we are root (the server refuses to run as root).
+import { execFileSync, spawnSync } from "node:child_process";
+import { chmodSync, chownSync, existsSync, mkdirSync, readdirSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import pg from "pg";
+
+export type PgServer = { url: (database: string) => string; port: number; stop: () => void; started: boolean };
+
+const isRoot = () => typeof process.getuid === "function" && process.getuid() === 0;
+
+function findBinDir(): string | null {
+  const candidates: string[] = [];
+  try {
+    const out = execFileSync("pg_config", ["--bindir"], { encoding: "utf8", stdio: ["ignore", "pipe", "ignore"] }).trim();
+    if (out) candidates.push(out);
+  } catch { /* not installed */ }
+  const base = "/usr/lib/postgresql";
+  if (existsSync(base)) {
+    for (const v of readdirSync(base).sort((a, b) => Number(b) - Number(a))) candidates.push(path.join(base, v, "bin"));
+  }
+  return candidates.find((dir) => existsSync(path.join(dir, "initdb")) && existsSync(path.join(dir, "pg_ctl"))) ?? null;
+}
+
+function ensureBinaries(log: (m: string) => void): string {
+  let dir = findBinDir();
+  if (dir) return dir;
+  if (!isRoot()) {
+    throw new Error("PostgreSQL server binaries (initdb, pg_ctl) were not found. Install them with `sudo apt-get install -y postgresql`, or set DATABASE_URL to an existing server.");
+  }
+  log("Installing Debian's postgresql package (binaries were missing)…");
+  const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
+  spawnSync("apt-get", ["update", "-qq"], { stdio: "inherit", env });
+  const r = spawnSync("apt-get", ["install", "-y", "-qq", "postgresql"], { stdio: "inherit", env });
+  if (r.status !== 0) throw new Error("apt-get install postgresql failed; install it by hand or set DATABASE_URL.");
+  dir = findBinDir();
+  if (!dir) throw new Error("postgresql installed, but initdb/pg_ctl are still not found.");
+  return dir;
+}
+
+function runAsOwner(bin: string, args: string[], opts: { quiet?: boolean } = {}) {
+  const cmd = isRoot() ? "runuser" : bin;
+  const full = isRoot() ? ["-u", "postgres", "--", bin, ...args] : args;
+  const r = spawnSync(cmd, full, { encoding: "utf8", stdio: opts.quiet ? "pipe" : ["ignore", "pipe", "pipe"] });
+  return { ok: r.status === 0, out: `${r.stdout ?? ""}${r.stderr ?? ""}` };
+}
+
+function chownTree(target: string, uid: number, gid: number) {
+  chownSync(target, uid, gid);
+}
+
+/**
+ * Start (or reuse) the project's cluster. Idempotent: when the server in `dataDir` already
+ * runs, it is reused and `stop` leaves it alone.
+ */
+export async function startPostgres(opts: { root: string; port: number; log?: (m: string) => void }): Promise<PgServer> {
+  const log = opts.log ?? ((m) => console.log(`[postgres] ${m}`));
+  const bin = ensureBinaries(log);
+  const dataRoot = path.join(opts.root, ".data");
+  const dataDir = path.join(dataRoot, "postgres");
+  mkdirSync(dataRoot, { recursive: true });
+  let uid = 0, gid = 0;
+  if (isRoot()) {
+    uid = Number(execFileSync("id", ["-u", "postgres"], { encoding: "utf8" }).trim());
+    gid = Number(execFileSync("id", ["-g", "postgres"], { encoding: "utf8" }).trim());
+    // The postgres user must be able to reach the data folder through the checkout.
+    let dir = dataRoot;
+    while (dir !== path.dirname(dir)) {
+      try { chmodSync(dir, 0o755); } catch { /* best effort for parents we cannot change */ }
+      dir = path.dirname(dir);
+      if (dir === "/") break;
+    }
+  }
+  if (!existsSync(path.join(dataDir, "PG_VERSION"))) {
+    mkdirSync(dataDir, { recursive: true });
+    if (isRoot()) chownTree(dataDir, uid, gid);
+    chmodSync(dataDir, 0o700);
+    log(`initialising a cluster in ${dataDir}`);
+    const init = runAsOwner(path.join(bin, "initdb"), ["-D", dataDir, "-U", "postgres", "--auth=trust", "-E", "UTF8", "--no-locale"]);
+    if (!init.ok) throw new Error(`initdb failed:\n${init.out}`);
+  }
+  const status = runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "status"], { quiet: true });
+  let started = false;
+  if (!status.ok) {
+    const logFile = path.join(dataRoot, "postgres.log");
+    writeFileSync(logFile, "", { flag: "a" });
+    if (isRoot()) chownSync(logFile, uid, gid);
+    const o = `-c listen_addresses=127.0.0.1 -p ${opts.port} -k ${dataDir} -c fsync=off -c synchronous_commit=off -c max_connections=200`;
+    const r = runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-l", logFile, "-o", o, "-w", "-t", "60", "start"]);
+    if (!r.ok) throw new Error(`PostgreSQL did not start (see ${logFile}):\n${r.out}`);
+    started = true;
+    log(`listening on 127.0.0.1:${opts.port}`);
+  } else {
+    log("reusing the running cluster");
+  }
+  const url = (database: string) => `postgres://postgres@127.0.0.1:${opts.port}/${database}`;
+  return {
+    url, port: opts.port, started,
+    stop: () => {
+      if (!started) return;
+      runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-m", "fast", "-w", "stop"], { quiet: true });
+    },
+  };
+}
+
+export async function ensureDatabase(adminUrl: string, database: string, opts: { fresh?: boolean } = {}) {
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try {
+    const safe = database.replace(/[^a-z0-9_]/g, "");
+    if (opts.fresh) await client.query(`DROP DATABASE IF EXISTS "${safe}" WITH (FORCE)`);
+    const { rowCount } = await client.query("SELECT 1 FROM pg_database WHERE datname = $1", [safe]);
+    if (!rowCount) await client.query(`CREATE DATABASE "${safe}"`);
+  } finally {
+    await client.end();
+  }
+}
+
+export async function dropDatabase(adminUrl: string, database: string) {
+  const client = new pg.Client({ connectionString: adminUrl });
+  await client.connect();
+  try { await client.query(`DROP DATABASE IF EXISTS "${database.replace(/[^a-z0-9_]/g, "")}" WITH (FORCE)`); }
+  finally { await client.end(); }
+}

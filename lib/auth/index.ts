@@ -1,0 +1,61 @@
+import "server-only";
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { nextCookies } from "better-auth/next-js";
+import { admin, organization } from "better-auth/plugins";
+import { getDb } from "@/db/client";
+import * as schema from "@/db/schema";
+import { linkMail, sendMail } from "@/lib/mail";
+import { shopAc, shopRoles, siteAc, siteRoles } from "./roles";
+
+const port = process.env.PORT ?? "3000";
+const baseURL = process.env.BETTER_AUTH_URL ?? `http://127.0.0.1:${port}`;
+
+function createAuth() {
+  return betterAuth({
+    appName: "Trainyard",
+    baseURL,
+    secret: process.env.BETTER_AUTH_SECRET,
+    trustedOrigins: [...new Set([baseURL, `http://127.0.0.1:${port}`, `http://localhost:${port}`])],
+    database: drizzleAdapter(getDb(), { provider: "pg", schema }),
+    emailAndPassword: {
+      enabled: true,
+      requireEmailVerification: true,
+      minPasswordLength: 8,
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, url }) => {
+        await sendMail({
+          to: user.email, subject: "Reset your Trainyard password",
+          ...linkMail("Someone asked to reset the password of this Trainyard account. If it was you, follow the link within an hour.", url, "Choose a new password", "If it was not you, ignore this message."),
+        });
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      sendOnSignIn: true,
+      autoSignInAfterVerification: true,
+      sendVerificationEmail: async ({ user, url }) => {
+        await sendMail({
+          to: user.email, subject: "Confirm your e-mail for Trainyard",
+          ...linkMail(`Welcome to Trainyard, ${user.name}. Confirm this address to sign in.`, url, "Confirm my e-mail"),
+        });
+      },
+    },
+    rateLimit: { enabled: process.env.TRAINYARD_RATE_LIMIT === "1", window: 60, max: 100 },
+    advanced: { database: { generateId: () => crypto.randomUUID() } },
+    plugins: [
+      admin({ ac: siteAc, roles: siteRoles, defaultRole: "member", adminRoles: ["admin"] }),
+      organization({ ac: shopAc, roles: shopRoles, creatorRole: "owner", allowUserToCreateOrganization: true }),
+      nextCookies(),
+    ],
+  });
+}
+
+type Auth = ReturnType<typeof createAuth>;
+const globalForAuth = globalThis as unknown as { trainyardAuth?: Auth };
+
+/** Created on first use: `next build` imports this module without a database. */
+export function getAuth(): Auth {
+  globalForAuth.trainyardAuth ??= createAuth();
+  return globalForAuth.trainyardAuth;
+}

@@ -1,0 +1,110 @@
+import "server-only";
+import { headers } from "next/headers";
+import type { z } from "zod";
+import { AppError, fieldErrorsOf, toErrorResponse } from "@/lib/errors";
+import { getAuth } from "./index";
+import { ROLE_RANK, roleOf, type SiteRole } from "./roles";
+
+export type SessionUser = { id: string; email: string; name: string; role: SiteRole; emailVerified: boolean };
+
+export async function getSessionUser(requestHeaders?: Headers): Promise<SessionUser | null> {
+  const session = await getAuth().api.getSession({ headers: requestHeaders ?? (await headers()) });
+  if (!session?.user) return null;
+  const u = session.user as typeof session.user & { role?: string | null; banned?: boolean | null };
+  if (u.banned) return null;
+  return { id: u.id, email: u.email, name: u.name, role: roleOf(u.role), emailVerified: u.emailVerified };
+}
+
+export function hasRole(user: SessionUser | null, role: SiteRole): boolean {
+  return !!user && ROLE_RANK[user.role] >= ROLE_RANK[role];
+}
+
+export function isModerator(user: SessionUser | null): boolean {
+  return hasRole(user, "moderator");
+}
+
+/** Throws unless the user is signed in with at least `role`. */
+export function requireRole(user: SessionUser | null, role: SiteRole = "member"): SessionUser {
+  if (!user) throw new AppError("unauthorized", "Sign in to do this.");
+  if (!hasRole(user, role)) throw new AppError("forbidden", `Only a ${role} can do this.`);
+  return user;
+}
+
+type RouteContext<P> = { params: Promise<P> };
+type Handler<P, U> = (request: Request, ctx: { user: U; params: P }) => Promise<Response> | Response;
+
+/**
+ * The one wrapper for route handlers: resolves the session, checks the role, awaits params,
+ * and turns any thrown error into the JSON error shape. Ownership is checked by the handler
+ * (through getXOrThrow query helpers), never assumed from the URL.
+ */
+export function withSession<P = Record<string, string>>(
+  handler: Handler<P, SessionUser>, opts?: { role?: SiteRole },
+): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
+export function withSession<P = Record<string, string>>(
+  handler: Handler<P, SessionUser | null>, opts: { anonymous: true },
+): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
+export function withSession<P>(
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- narrowed by the overloads above
+  handler: Handler<P, any>, opts: { role?: SiteRole; anonymous?: boolean } = {},
+) {
+  return async (request: Request, ctx: RouteContext<P>) => {
+    try {
+      const user = await getSessionUser(request.headers);
+      if (!opts.anonymous) requireRole(user, opts.role ?? "member");
+      const params = (await ctx?.params) ?? ({} as P);
+      return await handler(request, { user, params });
+    } catch (err) {
+      return toErrorResponse(err);
+    }
+  };
+}
+
+/** Parse a JSON body with a zod schema; 400 with field errors when it does not fit. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 8_000_000): Promise<z.output<S>> {
+  const length = Number(request.headers.get("content-length") ?? 0);
+  if (length > maxBytes) throw new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
+  let raw: unknown;
+  try {
+    const text = await request.text();
+    if (text.length > maxBytes) throw new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
+    raw = JSON.parse(text);
+  } catch (err) {
+    if (err instanceof AppError) throw err;
+    throw new AppError("bad_request:json", "The request body is not valid JSON.");
+  }
+  return parseWith(schema, raw);
+}
+
+export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.output<S> {
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw new AppError("bad_request:validation", "Some fields need attention.", fieldErrorsOf(parsed.error.issues));
+  return parsed.data;
+}
+
+export type ActionState<T = unknown> =
+  | { ok: true; data: T; message?: string }
+  | { ok: false; message: string; fieldErrors?: Record<string, string[]> }
+  | null;
+
+/**
+ * The one wrapper for server actions: session + role + zod, and errors as typed form state.
+ * Never echoes submitted values (passwords stay out of state).
+ */
+export function withAction<S extends z.ZodType, T>(
+  schema: S,
+  action: (input: z.output<S>, user: SessionUser) => Promise<T>,
+  opts: { role?: SiteRole } = {},
+) {
+  return async (input: unknown): Promise<ActionState<T>> => {
+    try {
+      const user = requireRole(await getSessionUser(), opts.role ?? "member");
+      const data = await action(parseWith(schema, input), user);
+      return { ok: true, data };
+    } catch (err) {
+      if (err instanceof AppError) return { ok: false, message: err.message, fieldErrors: err.fields };
+      console.error(err);
+      return { ok: false, message: "Something went wrong on our side. Please try again." };
+    }
+  };
+}

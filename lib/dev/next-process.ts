@@ -1,0 +1,53 @@
+// Building and serving the Next.js app as a child process.
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { existsSync, readdirSync, statSync } from "node:fs";
+import path from "node:path";
+
+const SOURCES = ["app", "components", "lib", "db", "proxy.ts", "next.config.ts", "postcss.config.mjs", "package-lock.json", "tsconfig.json"];
+
+function newestMtime(p: string): number {
+  if (!existsSync(p)) return 0;
+  const st = statSync(p);
+  if (!st.isDirectory()) return st.mtimeMs;
+  let newest = st.mtimeMs;
+  for (const entry of readdirSync(p)) newest = Math.max(newest, newestMtime(path.join(p, entry)));
+  return newest;
+}
+
+export function buildIsStale(root: string): boolean {
+  const buildId = path.join(root, ".next", "BUILD_ID");
+  if (!existsSync(buildId)) return true;
+  const built = statSync(buildId).mtimeMs;
+  return SOURCES.some((s) => newestMtime(path.join(root, s)) > built);
+}
+
+const nextBin = (root: string) => path.join(root, "node_modules", "next", "dist", "bin", "next");
+
+export function buildApp(root: string, env: NodeJS.ProcessEnv) {
+  const r = spawnSync(process.execPath, [nextBin(root), "build"], { cwd: root, stdio: "inherit", env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
+  if (r.status !== 0) throw new Error("next build failed");
+}
+
+export function serveApp(root: string, opts: { port: number; dev: boolean; env: NodeJS.ProcessEnv; quiet?: boolean }): ChildProcess {
+  const args = [nextBin(root), opts.dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(opts.port)];
+  return spawn(process.execPath, args, {
+    cwd: root, stdio: opts.quiet ? ["ignore", "pipe", "pipe"] : "inherit",
+    env: { ...opts.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: opts.dev ? "development" : "production" },
+  });
+}
+
+export async function waitForHealth(baseUrl: string, timeoutMs = 120_000) {
+  const deadline = Date.now() + timeoutMs;
+  let last = "";
+  while (Date.now() < deadline) {
+    try {
+      const res = await fetch(`${baseUrl}/api/health`);
+      if (res.ok) return;
+      last = `HTTP ${res.status}`;
+    } catch (err) {
+      last = (err as Error).message;
+    }
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error(`The app did not become healthy at ${baseUrl} (${last})`);
+}

@@ -1,0 +1,48 @@
+// One error type for the whole app; `toErrorResponse` turns it into JSON and hides internals.
+export type ErrorCode =
+  | "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "payload_too_large"
+  | "unavailable" | "internal";
+
+const STATUS: Record<ErrorCode, number> = {
+  bad_request: 400, unauthorized: 401, forbidden: 403, not_found: 404, conflict: 409,
+  payload_too_large: 413, unavailable: 503, internal: 500,
+};
+
+export class AppError extends Error {
+  readonly code: string;
+  readonly status: number;
+  readonly fields?: Record<string, string[]>;
+
+  /** `code` is "kind" or "kind:subject", e.g. "not_found:build", "forbidden:shop". */
+  constructor(code: `${ErrorCode}` | `${ErrorCode}:${string}`, message: string, fields?: Record<string, string[]>) {
+    super(message);
+    this.code = code;
+    this.status = STATUS[code.split(":")[0] as ErrorCode] ?? 500;
+    this.fields = fields;
+  }
+}
+
+export type ErrorBody = { error: { code: string; message: string; fields?: Record<string, string[]> } };
+
+export function errorBody(err: unknown): { status: number; body: ErrorBody } {
+  if (err instanceof AppError) {
+    return { status: err.status, body: { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } } };
+  }
+  console.error(err);
+  return { status: 500, body: { error: { code: "internal", message: "Something went wrong on our side. Please try again." } } };
+}
+
+export function toErrorResponse(err: unknown): Response {
+  const { status, body } = errorBody(err);
+  return Response.json(body, { status });
+}
+
+/** zod issues → { "a.b": ["message"] } */
+export function fieldErrorsOf(issues: readonly { path: readonly PropertyKey[]; message: string }[]): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of issues) {
+    const key = issue.path.map(String).join(".") || "_";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}

@@ -1,0 +1,18 @@
+import { drizzle } from "drizzle-orm/node-postgres";
+import pg from "pg";
+import * as schema from "@/db/schema";
+import { seedAccounts } from "./accounts";
+import { seedCatalog } from "./catalog-load";
+
+/** Seed the demo scenario: accounts, the demo shop and the invented catalog. Safe to repeat. */
+export async function seedDemo(databaseUrl: string, log: (m: string) => void = console.log) {
+  const pool = new pg.Pool({ connectionString: databaseUrl, max: 2 });
+  const db = drizzle(pool, { schema });
+  try {
+    await seedAccounts(db);
+    const added = await seedCatalog(db);
+    log(`[seed] demo accounts ready; ${added} catalog parts added`);
+  } finally {
+    await pool.end();
+  }
+}
