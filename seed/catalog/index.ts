@@ -26,7 +26,7 @@ export type DemoCase = {
   stations: string[];
   /** One filter of this thickness in the beam (n ≈ 1.5); 0 = no filter. */
   filterThicknessMm: number;
-  /** Connecting parts to solve with (e.g. what the imager owns); absent = every adapter, spacer and extension. */
+  /** Connecting parts to solve with (e.g. what the imager owns); absent = the whole catalog's connectors. */
   parts?: string[];
   /** Parts that, added to `parts`, turn the case into a solution. */
   remedy?: string[];
@@ -109,6 +109,6 @@ export const DEMO_CASES = {
     filterThicknessMm: 0,
     expect: "ok",
     fewestParts: 2,
-    story: "Reducer on the 2\"-24 thread wants 105 mm: prime-focus tube 50 + T-ring 11 + body 44 = 105 mm.",
+    story: "Reducer on the 2\"-24 thread wants 105 mm: prime-focus tube 50 + wide M48 T-ring 11 + body 44 = 105 mm.",
   },
 } satisfies Record<string, DemoCase>;

@@ -83,9 +83,9 @@ export const sctAccessories: PartInput[] = [
     lengthMm: 28, clearApertureMm: 44, weightG: 150, listPriceCents: 6900, description: "2-inch holder on a female 2\"-24 thread." }),
   part("Harrowgate & Pell", { kind: "adapter", model: "SCT 1.25in Visual Back", front: F("2in-24tpi"), rear: F("barrel-1.25in"),
     lengthMm: 22, clearApertureMm: 27, weightG: 90, listPriceCents: 2900, description: "1.25-inch holder on a female 2\"-24 thread." }),
-  part("Harrowgate & Pell", { kind: "adapter", model: "SCT Prime-Focus Tube, T", front: F("2in-24tpi"), rear: M("M42x0.75"),
-    lengthMm: 50, clearApertureMm: 38, weightG: 130, listPriceCents: 3900,
-    description: "50 mm tube: with a T-ring (11 mm on EF) and an EF body (44 mm) it makes the reducer's 105 mm." }),
+  part("Harrowgate & Pell", { kind: "adapter", model: "SCT Prime-Focus Tube, M48", front: F("2in-24tpi"), rear: M("M48x0.75"),
+    lengthMm: 50, clearApertureMm: 44, weightG: 140, listPriceCents: 4400,
+    description: "50 mm tube: with a wide M48 T-ring (11 mm on EF) and an EF body (44 mm) it makes the reducer's 105 mm." }),
 ];
 
 export const mounts: PartInput[] = [...tRings, ...nosepieces, ...holders, ...sctAccessories];

@@ -110,7 +110,7 @@ export const correctors: PartInput[] = [
     reduction: 0.85, imageCircleMm: 52, lengthMm: 36, clear: 46, weightG: 680, price: 54900,
     description: "Large-field reducer with an 85 mm back focus." }),
   corrector({ maker: H, model: "Ridgeway 0.63× SCT Reducer", front: F("2in-24tpi"), rear: "2in-24tpi", backFocusMm: 105, tol: 1,
-    reduction: 0.63, imageCircleMm: 26, lengthMm: 30, clear: 40, weightG: 250, price: 17900,
+    reduction: 0.63, imageCircleMm: 28, lengthMm: 30, clear: 40, weightG: 250, price: 17900,
     description: "Reducer-corrector for f/10 SCTs: female 2\"-24 front, male 2\"-24 rear, 105 mm back focus." }),
   corrector({ maker: H, model: "Ridgeway 0.7× SCT Reducer-Flattener", front: F("2in-24tpi"), rear: "M48x0.75", backFocusMm: 105, tol: 0.5,
     reduction: 0.7, imageCircleMm: 42, lengthMm: 34, clear: 44, weightG: 390, price: 44900,

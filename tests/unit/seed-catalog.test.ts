@@ -220,6 +220,8 @@ describe("demo catalog: the trade's conventions (common practice)", () => {
 // what its story says. Focus shift of a plate: t·(n − 1)/n with n = 1.5 (W. J. Smith,
 // Modern Optical Engineering, §7.8); 2 mm → 0.667 mm.
 type Port = { interface: string; gender: "male" | "female" };
+// The kinds the planner lets the solver use as fillers (as in lib/catalog/to-solver.ts).
+const CONNECTOR_KINDS: string[] = ["adapter", "spacer", "extension", "other"];
 const mates = (open: Port, front: Port | null) => !!front && front.interface === open.interface && front.gender !== open.gender;
 const orientations = (p: PartInput) => (p.reversible ? [[p.front!, p.rear!], [p.rear!, p.front!]] : [[p.front!, p.rear!]]);
 
@@ -229,7 +231,7 @@ function check(c: DemoCase, extra: string[] = []) {
   const stations = c.stations.map(get);
   const connectors = c.parts
     ? [...c.parts, ...extra].map(get)
-    : demoCatalog.filter((p) => ["adapter", "spacer", "extension"].includes(p.kind));
+    : demoCatalog.filter((p) => CONNECTOR_KINDS.includes(p.kind));
   const target = optics.specs!.backFocusMm! + (c.filterThicknessMm * 0.5) / 1.5;
   const tol = optics.specs!.backFocusToleranceMm ?? 0.5;
 
@@ -282,6 +284,16 @@ describe("demo cases", () => {
       for (const s of c.stations) expect(["filter-wheel", "filter-drawer", "oag"], `${name} ${s}`).toContain(get(s).kind);
       for (const s of [...(c.parts ?? []), ...(c.remedy ?? [])]) expect(get(s).slug).toBe(s);
       if (c.telescope) expect(mates(get(c.telescope).rear!, get(c.optics).front), `${name} telescope`).toBe(true);
+    }
+  });
+
+  it("ok cases fit the optics' image circle and the focuser's load", () => {
+    for (const [name, c] of cases.filter(([, x]) => x.expect === "ok")) {
+      const cam = get(c.camera).specs!;
+      const main = get(c.telescope ?? c.optics).specs!;
+      expect(Math.hypot(cam.sensorWidthMm!, cam.sensorHeightMm!), name).toBeLessThanOrEqual(get(c.optics).specs!.imageCircleMm!);
+      const grams = [c.camera, ...c.stations].reduce((g, s) => g + (get(s).weightG ?? 0), 0);
+      expect(grams, name).toBeLessThan(main.maxLoadG!);
     }
   });
 
