@@ -35,7 +35,11 @@ function vitest(projects: string[], env: NodeJS.ProcessEnv, extra: string[] = []
 }
 
 const args = process.argv.slice(2);
-let status = vitest(["unit"], process.env, args);
+console.log("[typecheck] tsc --noEmit");
+const tsc = spawnSync(process.execPath, [path.join(root, "node_modules", "typescript", "bin", "tsc"), "--noEmit", "-p", "tsconfig.json"], { cwd: root, stdio: "inherit" });
+if (tsc.status !== 0) totals.failed += 1;
+let status = tsc.status ?? 1;
+status = vitest(["unit"], process.env, args) || status;
 
 if (!process.env.TRAINYARD_UNIT_ONLY) {
   const haveChromium = ensureChromium();

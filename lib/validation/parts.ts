@@ -94,3 +94,20 @@ export function sensorDiagonalMm(specs: PartSpecs): number | undefined {
 export function slugify(...words: string[]): string {
   return words.join(" ").toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 140);
 }
+
+/** The submission form sends empty faces as { interface: "" }: turn those into null first. */
+export const partFormSchema = z.preprocess((raw) => {
+  if (typeof raw !== "object" || raw === null) return raw;
+  const v = { ...(raw as Record<string, unknown>) };
+  for (const side of ["front", "rear"] as const) {
+    const port = v[side] as { interface?: string } | null | undefined;
+    if (!port || !port.interface) v[side] = null;
+  }
+  if (v.specs && typeof v.specs === "object") {
+    v.specs = Object.fromEntries(Object.entries(v.specs as Record<string, unknown>).filter(([, x]) => x !== undefined && x !== "" && !(typeof x === "number" && Number.isNaN(x))));
+  }
+  for (const k of ["adjustMm", "clearApertureMm", "weightG", "listPriceCents", "description"]) {
+    if (v[k] === "" || (typeof v[k] === "number" && Number.isNaN(v[k]))) delete v[k];
+  }
+  return v;
+}, partInputSchema);

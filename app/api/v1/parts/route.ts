@@ -1,0 +1,12 @@
+// GET /api/v1/parts — search the approved catalog (q, kind, interface, limit, cursor)
+import { listApprovedParts } from "@/db/queries/parts";
+import { parseWith, withSession } from "@/lib/auth/session";
+import { listPartsQuerySchema } from "@/lib/validation/catalog";
+
+export const dynamic = "force-dynamic";
+
+export const GET = withSession(async (request) => {
+  const params = Object.fromEntries(new URL(request.url).searchParams);
+  const query = parseWith(listPartsQuerySchema, params);
+  return Response.json(await listApprovedParts({ query }));
+}, { anonymous: true });

@@ -1,0 +1,24 @@
+// POST /api/v1/submissions/:id/review — a moderator approves or rejects a submitted part
+import { getSubmissionOrThrow, reviewSubmission } from "@/db/queries/submissions";
+import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { rowToApiPart } from "@/lib/catalog/rows";
+import { sendMail } from "@/lib/mail";
+import { reviewDecisionSchema } from "@/lib/validation/submissions";
+
+export const dynamic = "force-dynamic";
+
+export const POST = withSession<{ id: string }>(async (request, { user, params }) => {
+  const { decision, reason } = await parseJsonBody(request, reviewDecisionSchema);
+  const updated = await reviewSubmission({ id: params.id, reviewerId: user.id, decision, reason });
+  const { submitterEmail } = await getSubmissionOrThrow({ id: params.id });
+  if (submitterEmail) {
+    const name = `${updated.maker} ${updated.model}`;
+    const base = process.env.BETTER_AUTH_URL ?? "";
+    await sendMail(decision === "approve"
+      ? { to: submitterEmail, subject: `Your part is in the catalog: ${name}`,
+          text: `Thank you. ${name} was checked by a moderator and is now in the Trainyard catalog, where the planner can use it.\n\n${base}/parts/${updated.slug}${reason ? `\n\nModerator's note: ${reason}` : ""}` }
+      : { to: submitterEmail, subject: `Your part was not added: ${name}`,
+          text: `A moderator looked at ${name} and did not add it to the catalog.\n\nReason: ${reason}\n\nYou can submit it again with corrected numbers or a clearer spec sheet.` });
+  }
+  return Response.json(rowToApiPart(updated));
+}, { role: "moderator" });

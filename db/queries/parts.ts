@@ -1,0 +1,85 @@
+import "server-only";
+import { and, asc, eq, gt, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
+import { db } from "@/db/client";
+import { catalogState, parts } from "@/db/schema";
+import { rowToApiPart } from "@/lib/catalog/rows";
+import { AppError } from "@/lib/errors";
+import { decodeCursor, encodeCursor, type ListPartsQuery } from "@/lib/validation/catalog";
+
+function escapeLike(s: string) {
+  return s.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+/** Approved parts, filtered and keyset-paged by slug. */
+export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
+  const where: SQL[] = [eq(parts.status, "approved")];
+  if (query.kind) where.push(eq(parts.kind, query.kind));
+  if (query.interface) where.push(or(eq(parts.frontInterface, query.interface), eq(parts.rearInterface, query.interface))!);
+  if (query.q) {
+    for (const word of query.q.split(/\s+/).filter(Boolean).slice(0, 6)) {
+      const like = `%${escapeLike(word)}%`;
+      where.push(or(ilike(parts.maker, like), ilike(parts.model, like), ilike(parts.slug, like), ilike(parts.kind, like),
+        ilike(parts.frontInterface, like), ilike(parts.rearInterface, like))!);
+    }
+  }
+  if (query.cursor) where.push(gt(parts.slug, decodeCursor(query.cursor)));
+  const rows = await db.select().from(parts).where(and(...where)).orderBy(asc(parts.slug)).limit(query.limit + 1);
+  const page = rows.slice(0, query.limit);
+  return {
+    items: page.map(rowToApiPart),
+    nextCursor: rows.length > query.limit ? encodeCursor(page[page.length - 1].slug) : null,
+  };
+}
+
+export async function countApprovedParts() {
+  const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(parts).where(eq(parts.status, "approved"));
+  return row.n;
+}
+
+/** By id or slug; pending and rejected parts only for their submitter or a moderator. */
+export async function getPartOrThrow({ ref, viewer }: { ref: string; viewer?: { id: string; moderator: boolean } | null }) {
+  const isUuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(ref);
+  const [row] = await db.select().from(parts).where(isUuid ? or(eq(parts.id, ref), eq(parts.slug, ref)) : eq(parts.slug, ref)).limit(1);
+  const visible = row && (row.status === "approved" || viewer?.moderator || (viewer && row.submittedBy === viewer.id));
+  if (!row || !visible) throw new AppError("not_found:part", `No part "${ref}" in the catalog.`);
+  return row;
+}
+
+/** Approved parts by ids or slugs, in one query. */
+export async function getApprovedPartsByRefs({ refs }: { refs: string[] }) {
+  if (!refs.length) return [];
+  const ids = refs.filter((r) => /^[0-9a-f-]{36}$/i.test(r));
+  const rows = await db.select().from(parts).where(and(eq(parts.status, "approved"),
+    ids.length ? or(inArray(parts.slug, refs), inArray(parts.id, ids)) : inArray(parts.slug, refs)));
+  return rows;
+}
+
+export async function listAllApprovedParts() {
+  return db.select().from(parts).where(eq(parts.status, "approved")).orderBy(asc(parts.slug));
+}
+
+export async function getCatalogVersion(): Promise<number> {
+  const [row] = await db.select({ version: catalogState.version }).from(catalogState).where(eq(catalogState.id, 1));
+  return row?.version ?? 0;
+}
+
+/** A moderator's correction to a catalog part; bumps the catalog version when it is approved. */
+export async function updatePart({ slug, patch }: { slug: string; patch: import("@/lib/validation/submissions").PartPatch }) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(parts).where(eq(parts.slug, slug)).for("update");
+    if (!row) throw new AppError("not_found:part", `No part "${slug}" in the catalog.`);
+    const set: Partial<typeof parts.$inferInsert> = { updatedAt: new Date() };
+    const { front, rear, specs, ...plain } = patch;
+    Object.assign(set, plain);
+    if (front !== undefined) { set.frontInterface = front?.interface ?? null; set.frontGender = front?.gender ?? null; }
+    if (rear !== undefined) { set.rearInterface = rear?.interface ?? null; set.rearGender = rear?.gender ?? null; }
+    if (specs) set.specs = { ...row.specs, ...specs };
+    const [updated] = await tx.update(parts).set(set).where(eq(parts.id, row.id)).returning();
+    if (row.status === "approved") {
+      await tx.insert(catalogState).values({ id: 1, version: 1 }).onConflictDoUpdate({
+        target: catalogState.id, set: { version: sql`${catalogState.version} + 1`, updatedAt: new Date() },
+      });
+    }
+    return updated;
+  });
+}

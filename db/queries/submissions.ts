@@ -1,0 +1,71 @@
+import "server-only";
+import { and, asc, desc, eq, ilike, ne, sql } from "drizzle-orm";
+import { db } from "@/db/client";
+import { catalogState, parts, user } from "@/db/schema";
+import { partToRow } from "@/lib/catalog/rows";
+import { AppError } from "@/lib/errors";
+import { slugify, type PartParsed } from "@/lib/validation/parts";
+
+async function uniqueSlug(base: string): Promise<string> {
+  for (let i = 0; i < 50; i++) {
+    const slug = i === 0 ? base : `${base}-${i + 1}`;
+    const [hit] = await db.select({ id: parts.id }).from(parts).where(eq(parts.slug, slug)).limit(1);
+    if (!hit) return slug;
+  }
+  return `${base}-${crypto.randomUUID().slice(0, 8)}`;
+}
+
+/** A member's submission: stored as pending, flagged when maker + model already exist. */
+export async function createSubmission({ input, userId, specSheet }: {
+  input: PartParsed; userId: string; specSheet: { key: string; type: string } | null;
+}) {
+  const [dup] = await db.select({ id: parts.id, slug: parts.slug }).from(parts)
+    .where(and(ilike(parts.maker, input.maker.trim()), ilike(parts.model, input.model.trim()), ne(parts.status, "rejected"))).limit(1);
+  const slug = await uniqueSlug(input.slug ?? slugify(input.maker, input.model));
+  const [row] = await db.insert(parts).values({
+    ...partToRow(input), slug, status: "pending", submittedBy: userId,
+    specSheetKey: specSheet?.key ?? null, specSheetType: specSheet?.type ?? null, probableDuplicateOf: dup?.slug ?? null,
+  }).returning();
+  return row;
+}
+
+export async function listPendingSubmissions() {
+  return db.select({ part: parts, submitter: { name: user.name, email: user.email } }).from(parts)
+    .leftJoin(user, eq(user.id, parts.submittedBy)).where(eq(parts.status, "pending")).orderBy(asc(parts.createdAt));
+}
+
+export async function listSubmissionsBy({ userId }: { userId: string }) {
+  return db.select().from(parts).where(eq(parts.submittedBy, userId)).orderBy(desc(parts.createdAt)).limit(100);
+}
+
+export async function getSubmissionOrThrow({ id }: { id: string }) {
+  const [row] = await db.select({ part: parts, submitterEmail: user.email, submitterName: user.name }).from(parts)
+    .leftJoin(user, eq(user.id, parts.submittedBy)).where(eq(parts.id, id)).limit(1);
+  if (!row) throw new AppError("not_found:submission", "No such submission.");
+  return row;
+}
+
+/** Approve or reject a pending part in one transaction; approval bumps the catalog version. */
+export async function reviewSubmission({ id, reviewerId, decision, reason }: {
+  id: string; reviewerId: string; decision: "approve" | "reject"; reason?: string;
+}) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(parts).where(eq(parts.id, id)).for("update");
+    if (!row) throw new AppError("not_found:submission", "No such submission.");
+    if (row.status !== "pending") throw new AppError("conflict:submission", `This submission was already ${row.status}.`);
+    const [updated] = await tx.update(parts).set({
+      status: decision === "approve" ? "approved" : "rejected", reviewedBy: reviewerId, reviewReason: reason ?? null,
+      reviewedAt: new Date(), updatedAt: new Date(),
+    }).where(eq(parts.id, id)).returning();
+    if (decision === "approve") await bumpCatalogVersion(tx);
+    return updated;
+  });
+}
+
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+export async function bumpCatalogVersion(tx: Tx | typeof db = db) {
+  await tx.insert(catalogState).values({ id: 1, version: 1 }).onConflictDoUpdate({
+    target: catalogState.id, set: { version: sql`${catalogState.version} + 1`, updatedAt: new Date() },
+  });
+}

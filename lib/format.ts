@@ -1,0 +1,26 @@
+// Display helpers shared by pages (no framework imports).
+export const KIND_LABELS: Record<string, string> = {
+  optics: "Optics", camera: "Camera", adapter: "Adapter", spacer: "Spacer", extension: "Extension",
+  "filter-wheel": "Filter wheel", "filter-drawer": "Filter drawer", oag: "Off-axis guider",
+  "tilt-plate": "Tilt plate", diagonal: "Diagonal", other: "Other",
+};
+
+export function formatMm(mm: number | null | undefined, digits = 1): string {
+  return mm === null || mm === undefined || !Number.isFinite(mm) ? "—" : `${mm.toFixed(digits)} mm`;
+}
+
+export function formatInches(mm: number | null | undefined, digits = 3): string {
+  return mm === null || mm === undefined || !Number.isFinite(mm) ? "—" : `${(mm / 25.4).toFixed(digits)} in`;
+}
+
+export function formatLengthIn(unit: "mm" | "in", mm: number | null | undefined): string {
+  return unit === "in" ? formatInches(mm) : formatMm(mm);
+}
+
+export function formatPrice(cents: number | null | undefined): string {
+  return cents === null || cents === undefined ? "—" : `${(cents / 100).toFixed(2)}`;
+}
+
+export function formatGrams(g: number | null | undefined): string {
+  return g === null || g === undefined ? "—" : g >= 1000 ? `${(g / 1000).toFixed(2)} kg` : `${Math.round(g)} g`;
+}

@@ -1,0 +1,163 @@
+import "server-only";
+import { listOwnedParts } from "@/db/queries/gear";
+import { getApprovedPartsByRefs, getCatalogVersion, listAllApprovedParts } from "@/db/queries/parts";
+import type { PartRow } from "@/db/schema";
+import type { SessionUser } from "@/lib/auth/session";
+import {
+  CONNECTOR_KINDS, buildCamera, buildOptics, derivedNumbers, rowToPlanItem, rowToSolverPart,
+} from "@/lib/catalog/to-solver";
+import { AppError } from "@/lib/errors";
+import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
+import type { PlanItem, PlanResponse } from "./api-types";
+
+type Ref = { partId: string };
+const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
+
+export type PlanInput = {
+  optics: Ref | Optics;
+  camera: Ref | Camera;
+  corrector?: Ref;
+  stations?: (Ref | Part)[];
+  filters?: SolveRequest["filters"];
+  parts?: Part[];
+  source?: { kind: "catalog" | "owned" | "shop"; shopId?: string };
+  backFocusToleranceMm?: number;
+  maxParts?: number;
+  maxSolutions?: number;
+};
+
+// The approved connectors, rebuilt only when the catalog version changes, so the solver's
+// graph cache (keyed by this array) is reused across requests.
+let catalogCache: { version: number; rows: Map<string, PartRow>; connectors: Part[] } | null = null;
+
+async function catalogConnectors() {
+  const version = await getCatalogVersion();
+  if (!catalogCache || catalogCache.version !== version) {
+    const rows = await listAllApprovedParts();
+    catalogCache = {
+      version,
+      rows: new Map(rows.map((r) => [r.slug, r])),
+      connectors: rows.filter((r) => CONNECTOR_KINDS.has(r.kind)).map((r) => rowToSolverPart(r)),
+    };
+  }
+  return catalogCache;
+}
+
+async function resolveRefs(input: PlanInput) {
+  const refs = [input.optics, input.camera, input.corrector, ...(input.stations ?? [])].filter(isRef).map((r) => r.partId);
+  const rows = await getApprovedPartsByRefs({ refs });
+  const byRef = new Map<string, PartRow>();
+  for (const r of rows) { byRef.set(r.slug, r); byRef.set(r.id, r); }
+  const get = (ref: Ref, field: string, kinds: string[] | null, what: string): PartRow => {
+    const row = byRef.get(ref.partId);
+    if (!row) throw new AppError("not_found:part", `No approved part "${ref.partId}" in the catalog.`, { [field]: [`No approved part "${ref.partId}"`] });
+    if (kinds && !kinds.includes(row.kind)) throw new AppError("bad_request:validation", `${row.maker} ${row.model} is not ${what}.`, { [field]: [`Not ${what}`] });
+    return row;
+  };
+  return { get };
+}
+
+function collectIds(result: SolveResult | null, into: Set<string>) {
+  if (!result) return;
+  for (const chain of [result.shortest, ...result.solutions]) for (const s of chain?.steps ?? []) into.add(s.partId);
+}
+
+/** Solve a plan whose items may be catalog references; inline-only requests are solved as they are. */
+export async function runPlan({ input, viewer }: { input: PlanInput; viewer: SessionUser | null }): Promise<SolveResult | PlanResponse> {
+  const allInline = !isRef(input.optics) && !isRef(input.camera) && !input.corrector && !(input.stations ?? []).some(isRef) && input.parts;
+  const base = { filters: input.filters, maxParts: input.maxParts, maxSolutions: input.maxSolutions };
+  if (allInline) {
+    const optics = input.backFocusToleranceMm !== undefined ? { ...(input.optics as Optics), backFocusToleranceMm: input.backFocusToleranceMm } : input.optics as Optics;
+    return solveTrain({ ...base, optics, camera: input.camera as Camera, stations: input.stations as Part[] | undefined, parts: input.parts! });
+  }
+
+  const catalog = await catalogConnectors();
+  const { get } = await resolveRefs(input);
+  const items: Record<string, PlanItem> = {};
+
+  // Parts to draw from.
+  let parts: Part[];
+  if (input.parts) parts = input.parts;
+  else if (!input.source || input.source.kind === "catalog") parts = catalog.connectors;
+  else if (input.source.kind === "owned") {
+    if (!viewer) throw new AppError("unauthorized", "Sign in to plan with the parts you own.");
+    const owned = (await listOwnedParts({ userId: viewer.id })).filter((o) => CONNECTOR_KINDS.has(o.part.kind));
+    for (const o of owned) items[`${o.part.slug}~owned`] = rowToPlanItem(o.part, { owned: true });
+    parts = [...owned.map((o) => rowToSolverPart(o.part, { owned: true, quantity: o.quantity })), ...catalog.connectors];
+  } else {
+    throw new AppError("bad_request:source", "Planning with a shop's stock is not available yet: use the catalog or your own gear.", { "source.kind": ["Shop stock is not available yet"] });
+  }
+
+  // The optics (and an optional separate corrector).
+  let telescopeRow: PartRow | null = null;
+  let correctorRow: PartRow | null = null;
+  let optics: Optics;
+  let focalLengthMm: number | null = null, apertureMm: number | null = null, focalRatio: number | null = null;
+  let mainRow: PartRow | null = null;
+  if (isRef(input.optics)) {
+    mainRow = get(input.optics, "optics.partId", ["optics"], "a telescope, an astrograph or a corrector");
+    if (input.corrector) {
+      correctorRow = get(input.corrector, "corrector.partId", ["optics"], "a corrector");
+      if (correctorRow.specs.opticsRole !== "corrector") throw new AppError("bad_request:validation", `${correctorRow.maker} ${correctorRow.model} is not a corrector.`, { "corrector.partId": ["Not a corrector"] });
+      if (mainRow.specs.opticsRole !== "telescope") throw new AppError("bad_request:validation", "A separate corrector goes behind a telescope, not behind another corrector or an astrograph.", { "optics.partId": ["Choose a telescope to put the corrector behind"] });
+      telescopeRow = mainRow;
+    }
+    ({ optics, focalLengthMm, apertureMm, focalRatio } = buildOptics(mainRow, correctorRow, input.backFocusToleranceMm));
+    items[optics.id] = rowToPlanItem(correctorRow ?? mainRow);
+    if (telescopeRow) items[telescopeRow.slug] = rowToPlanItem(telescopeRow);
+  } else {
+    optics = input.backFocusToleranceMm !== undefined ? { ...input.optics, backFocusToleranceMm: input.backFocusToleranceMm } : input.optics;
+    focalRatio = optics.focalRatio ?? null;
+  }
+
+  const cameraRow = isRef(input.camera) ? get(input.camera, "camera.partId", ["camera"], "a camera") : null;
+  const camera = cameraRow ? buildCamera(cameraRow) : (input.camera as Camera);
+  if (cameraRow) items[camera.id] = rowToPlanItem(cameraRow);
+
+  const stations = (input.stations ?? []).map((s, i) => {
+    if (!isRef(s)) return s;
+    const row = get(s, `stations.${i}.partId`, null, "a device");
+    if (row.kind === "optics" || row.kind === "camera") throw new AppError("bad_request:validation", `${row.maker} ${row.model} cannot be a device in the middle of the train.`, { [`stations.${i}.partId`]: ["Optics and cameras go at the ends"] });
+    items[row.slug] = rowToPlanItem(row);
+    return rowToSolverPart(row);
+  });
+
+  const result = solveTrain({ ...base, optics, camera, stations, parts });
+  let telescopeLink: SolveResult | null = null;
+  if (telescopeRow && correctorRow) {
+    // Telescope → corrector: any mating chain will do (no back focus on this side).
+    const scope: Optics = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
+    const corrAsEnd: Camera = { ...rowToSolverPart(correctorRow), id: `${correctorRow.slug}`, rear: null, lengthMm: 0 };
+    telescopeLink = solveTrain({ optics: scope, camera: corrAsEnd, parts, maxSolutions: 3, maxParts: 6 });
+  }
+
+  const used = new Set<string>();
+  collectIds(result, used);
+  collectIds(telescopeLink, used);
+  for (const id of used) {
+    if (items[id]) continue;
+    const row = catalog.rows.get(id.replace(/~owned$/, ""));
+    if (row) items[id] = rowToPlanItem(row, { owned: id.endsWith("~owned") });
+  }
+
+  return {
+    ...result,
+    telescopeLink,
+    context: {
+      items,
+      opticsId: optics.id,
+      telescopeId: telescopeRow?.slug ?? null,
+      cameraId: camera.id,
+      stationIds: stations.map((s) => s.id),
+      focalLengthMm, apertureMm, focalRatio,
+      imageCircleMm: optics.imageCircleMm ?? null,
+      maxLoadG: optics.maxLoadG ?? null,
+      ...(cameraRow ? derivedNumbers(cameraRow, focalLengthMm, focalRatio) : {
+        sensorWidthMm: null, sensorHeightMm: null, sensorDiagonalMm: camera.sensorDiagonalMm ?? null, pixelSizeUm: null,
+        plateScaleArcsecPerPx: null, fieldOfViewDeg: null, criticalFocusZoneUm: null,
+      }),
+      source: input.source?.kind ?? "catalog",
+      catalogVersion: catalog.version,
+    },
+  };
+}

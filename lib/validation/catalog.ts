@@ -1,0 +1,21 @@
+import { z } from "zod";
+import { isKnownInterface } from "@/lib/interfaces";
+import { PART_KINDS } from "./parts";
+
+/** Query of GET /api/v1/parts. Everything arrives as strings; bad values are a 400. */
+export const listPartsQuerySchema = z.object({
+  q: z.string().trim().max(100, "At most 100 characters").optional(),
+  kind: z.enum(PART_KINDS, { message: `One of: ${PART_KINDS.join(", ")}` }).optional(),
+  interface: z.string().refine(isKnownInterface, "Unknown interface code").optional(),
+  limit: z.coerce.number({ message: "A whole number from 1 to 200" }).int("A whole number from 1 to 200")
+    .min(1, "A whole number from 1 to 200").max(200, "A whole number from 1 to 200").default(50),
+  cursor: z.string().max(200).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API").optional(),
+});
+export type ListPartsQuery = z.infer<typeof listPartsQuerySchema>;
+
+export function encodeCursor(slug: string): string {
+  return Buffer.from(slug, "utf8").toString("base64url");
+}
+export function decodeCursor(cursor: string): string {
+  return Buffer.from(cursor, "base64url").toString("utf8");
+}

@@ -1,0 +1,77 @@
+// Talking to the running app in integration tests: a tiny cookie-keeping client.
+export const BASE_URL = process.env.BASE_URL ?? "";
+export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "trainyard-demo";
+
+if (!BASE_URL) throw new Error("BASE_URL is not set: run integration tests through `npm test`.");
+
+export class Client {
+  private cookies = new Map<string, string>();
+
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+
+  async request(path: string, init: RequestInit & { json?: unknown } = {}): Promise<Response> {
+    const headers = new Headers(init.headers);
+    headers.set("origin", BASE_URL);
+    if (this.cookies.size) headers.set("cookie", this.cookieHeader());
+    let body = init.body;
+    if (init.json !== undefined) {
+      headers.set("content-type", "application/json");
+      body = JSON.stringify(init.json);
+    }
+    const res = await fetch(`${BASE_URL}${path}`, { ...init, headers, body, redirect: init.redirect ?? "manual" });
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(";");
+      const i = pair.indexOf("=");
+      const name = pair.slice(0, i).trim();
+      const value = pair.slice(i + 1).trim();
+      if (value === "" || /max-age=0/i.test(c)) this.cookies.delete(name);
+      else this.cookies.set(name, value);
+    }
+    return res;
+  }
+
+  get(path: string) { return this.request(path); }
+  post(path: string, json?: unknown) { return this.request(path, { method: "POST", json }); }
+  patch(path: string, json?: unknown) { return this.request(path, { method: "PATCH", json }); }
+  delete(path: string) { return this.request(path, { method: "DELETE" }); }
+
+  async signIn(email: string, password = DEMO_PASSWORD) {
+    const res = await this.post("/api/auth/sign-in/email", { email, password });
+    if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${await res.text()}`);
+    return this;
+  }
+}
+
+export async function signedIn(email: string) {
+  return new Client().signIn(email);
+}
+
+export type OutboxMessage = { to: string; subject: string; text: string; html: string; createdAt: string };
+
+export async function outboxFor(email: string): Promise<OutboxMessage[]> {
+  const res = await fetch(`${BASE_URL}/api/dev/outbox`);
+  if (!res.ok) throw new Error(`outbox answered ${res.status}`);
+  const { messages } = (await res.json()) as { messages: OutboxMessage[] };
+  return messages.filter((m) => m.to.toLowerCase().includes(email.toLowerCase()));
+}
+
+/** Mail is delivered through SMTP asynchronously; poll briefly. */
+export async function waitForMail(email: string, subjectPart: string, timeoutMs = 10_000): Promise<OutboxMessage> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const found = (await outboxFor(email)).find((m) => m.subject.includes(subjectPart));
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no "${subjectPart}" mail for ${email}`);
+}
+
+export function firstLink(text: string): string {
+  const m = text.match(/https?:\/\/\S+/);
+  if (!m) throw new Error("no link in message");
+  return m[0];
+}
+
+export const uniqueEmail = (tag: string) => `${tag}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@example.org`;
