@@ -1,0 +1,151 @@
+// The catalog model: every usable orientation of every connecting part, as an edge between
+// open faces, sorted and grouped by (from, to). Built once per parts array and cached.
+
+import type DirectedGraphType from "graphology";
+import { FaceTable } from "./faces";
+import { buildFaceGraph } from "./graph";
+import type { Part } from "./types";
+
+export type Model = {
+  parts: readonly Part[];
+  faces: FaceTable;
+  /** Per part: most uses in one chain (Infinity = unlimited). */
+  quantity: Float64Array;
+  // Orientations, sorted by (from, to, length, price, part).
+  oPart: Int32Array;
+  oRev: Uint8Array;
+  oFrom: Int32Array;
+  oTo: Int32Array;
+  oLen: Float64Array;
+  oAdj: Float64Array;
+  /** priceCents, Infinity when unknown (unknown ranks last). */
+  oPrice: Float64Array;
+  // Groups: maximal runs of orientations with the same (from, to).
+  gFrom: Int32Array;
+  gTo: Int32Array;
+  gStart: Int32Array;
+  gEnd: Int32Array;
+  gMinLen: Float64Array;
+  gMaxLenAdj: Float64Array;
+  gMaxAdj: Float64Array;
+  gMinPrice: Float64Array;
+  /** Groups leaving face f: [faceOut[f], faceOut[f + 1]). */
+  faceOut: Int32Array;
+  /** Groups entering face f: inGroups[faceIn[f] .. faceIn[f + 1]). */
+  inGroups: Int32Array;
+  faceIn: Int32Array;
+  /** Largest of a few round steps (mm) that every length and adjustment is a multiple of. */
+  grainMm: number | null;
+  /** The face graph for Dijkstra: one edge per group, the lightest orientation. */
+  graph: DirectedGraphType<Record<string, never>, { weight: number; orient: number }>;
+  buildMs: number;
+};
+
+const GRAINS = [1, 0.5, 0.25, 0.2, 0.1, 0.05, 0.02, 0.01];
+
+export function isMultiple(value: number, step: number): boolean {
+  const q = value / step;
+  return Math.abs(q - Math.round(q)) < 1e-6;
+}
+
+export function grainOf(values: Iterable<number>, candidates: readonly number[] = GRAINS): number | null {
+  let alive = candidates.slice();
+  for (const v of values) {
+    if (v === 0) continue;
+    alive = alive.filter((g) => isMultiple(v, g));
+    if (alive.length === 0) return null;
+  }
+  return alive[0] ?? null;
+}
+
+function usableConnector(p: Part): boolean {
+  return !!p.front && !!p.rear && Number.isFinite(p.lengthMm) && p.lengthMm >= 0 && (p.quantity === undefined || p.quantity >= 1);
+}
+
+export function buildModel(parts: readonly Part[]): Model {
+  const t0 = performance.now();
+  const faces = new FaceTable();
+  const quantity = new Float64Array(parts.length);
+  const rawPart: number[] = [];
+  const rawRev: number[] = [];
+  const rawFrom: number[] = [];
+  const rawTo: number[] = [];
+  for (let i = 0; i < parts.length; i++) {
+    const p = parts[i];
+    quantity[i] = p.quantity === undefined ? Infinity : Math.floor(p.quantity);
+    if (!usableConnector(p)) continue;
+    const front = p.front!;
+    const rear = p.rear!;
+    rawPart.push(i); rawRev.push(0); rawFrom.push(faces.entryOf(front)); rawTo.push(faces.exitOf(rear));
+    const symmetric = front.interface === rear.interface && front.gender === rear.gender;
+    if (p.reversible && !symmetric) {
+      rawPart.push(i); rawRev.push(1); rawFrom.push(faces.entryOf(rear)); rawTo.push(faces.exitOf(front));
+    }
+  }
+  const n = rawPart.length;
+  const price = (i: number) => parts[rawPart[i]].priceCents ?? Infinity;
+  const order = Array.from({ length: n }, (_, i) => i);
+  order.sort((a, b) =>
+    rawFrom[a] - rawFrom[b] || rawTo[a] - rawTo[b] || parts[rawPart[a]].lengthMm - parts[rawPart[b]].lengthMm ||
+    cmpPrice(price(a), price(b)) || rawPart[a] - rawPart[b] || rawRev[a] - rawRev[b]);
+
+  const oPart = new Int32Array(n), oRev = new Uint8Array(n), oFrom = new Int32Array(n), oTo = new Int32Array(n);
+  const oLen = new Float64Array(n), oAdj = new Float64Array(n), oPrice = new Float64Array(n);
+  order.forEach((src, k) => {
+    const p = parts[rawPart[src]];
+    oPart[k] = rawPart[src]; oRev[k] = rawRev[src]; oFrom[k] = rawFrom[src]; oTo[k] = rawTo[src];
+    oLen[k] = p.lengthMm; oAdj[k] = Math.max(0, p.adjustMm ?? 0); oPrice[k] = price(src);
+  });
+
+  const groups: number[] = [];
+  for (let k = 0; k < n; k++) if (k === 0 || oFrom[k] !== oFrom[k - 1] || oTo[k] !== oTo[k - 1]) groups.push(k);
+  const G = groups.length;
+  const gFrom = new Int32Array(G), gTo = new Int32Array(G), gStart = new Int32Array(G), gEnd = new Int32Array(G);
+  const gMinLen = new Float64Array(G), gMaxLenAdj = new Float64Array(G), gMaxAdj = new Float64Array(G), gMinPrice = new Float64Array(G);
+  for (let g = 0; g < G; g++) {
+    const s = groups[g], e = g + 1 < G ? groups[g + 1] : n;
+    gFrom[g] = oFrom[s]; gTo[g] = oTo[s]; gStart[g] = s; gEnd[g] = e; gMinLen[g] = oLen[s];
+    let maxLA = 0, maxA = 0, minP = Infinity;
+    for (let k = s; k < e; k++) {
+      maxLA = Math.max(maxLA, oLen[k] + oAdj[k]); maxA = Math.max(maxA, oAdj[k]); minP = Math.min(minP, oPrice[k]);
+    }
+    gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP;
+  }
+
+  const F = faces.size;
+  const faceOut = new Int32Array(F + 1).fill(G);
+  for (let g = G - 1; g >= 0; g--) faceOut[gFrom[g]] = g;
+  for (let f = F - 1; f >= 0; f--) if (faceOut[f] > faceOut[f + 1]) faceOut[f] = faceOut[f + 1];
+  const inGroups = Int32Array.from({ length: G }, (_, g) => g).sort((a, b) => gTo[a] - gTo[b] || a - b);
+  const faceIn = new Int32Array(F + 1).fill(G);
+  for (let i = G - 1; i >= 0; i--) faceIn[gTo[inGroups[i]]] = i;
+  for (let f = F - 1; f >= 0; f--) if (faceIn[f] > faceIn[f + 1]) faceIn[f] = faceIn[f + 1];
+
+  const lengths = function* () { for (let k = 0; k < n; k++) { yield oLen[k]; yield oAdj[k]; } };
+  const model: Omit<Model, "graph" | "buildMs"> = {
+    parts, faces, quantity, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
+    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn,
+    grainMm: grainOf(lengths()),
+  };
+  const graph = buildFaceGraph(model);
+  return { ...model, graph, buildMs: performance.now() - t0 };
+}
+
+export function cmpPrice(a: number, b: number): number {
+  return a === b ? 0 : a < b ? -1 : 1;
+}
+
+const cache = new WeakMap<readonly Part[], Model>();
+
+/**
+ * The model for a parts array, built once and reused while the same array object comes
+ * back (the catalog route keeps one array per catalog version). Treat the array as
+ * immutable: a changed length triggers a rebuild, edits in place are not detected.
+ */
+export function getModel(parts: readonly Part[]): Model {
+  const hit = cache.get(parts);
+  if (hit && hit.quantity.length === parts.length) return hit;
+  const model = buildModel(parts);
+  cache.set(parts, model);
+  return model;
+}

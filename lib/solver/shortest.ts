@@ -1,0 +1,137 @@
+// The shortest chain: Dijkstra (graphology-shortest-path) on the face graph, once per leg,
+// joined through the stations' mounts. Dijkstra knows nothing of stock or maxParts — it may
+// use one part in two legs, or more parts than allowed — so its answer is checked and, when
+// it breaks a limit, an exact constrained search takes over.
+
+import { dijkstra } from "graphology-shortest-path";
+import type { Problem } from "./problem";
+import type { Tables } from "./tables";
+import { stationMove } from "./topk";
+
+type LegPath = { len: number; moves: number[] } | null;
+
+function legPath(p: Problem, from: number, to: number, memo: Map<string, LegPath>): LegPath {
+  const key = `${from}>${to}`;
+  if (memo.has(key)) return memo.get(key)!;
+  let out: LegPath = null;
+  const g = p.model.graph;
+  if (from === to) out = { len: 0, moves: [] };
+  else if (from < p.model.faces.size && to < p.model.faces.size) {
+    const nodes = dijkstra.bidirectional(g, p.faces.nodeKey(from), p.faces.nodeKey(to), "weight") as string[] | null;
+    if (nodes && nodes.length > 1) {
+      const moves: number[] = [];
+      let len = 0;
+      for (let i = 1; i < nodes.length; i++) {
+        const o = g.getEdgeAttributes(g.edge(nodes[i - 1], nodes[i])!).orient;
+        moves.push(o);
+        len += p.model.oLen[o];
+      }
+      out = { len, moves };
+    }
+  }
+  memo.set(key, out);
+  return out;
+}
+
+/** Dijkstra's chain, ignoring stock and maxParts; null when nothing connects. */
+export function dijkstraChain(p: Problem): number[] | null {
+  if (p.start < 0 || p.camEntry < 0) return null;
+  const memo = new Map<string, LegPath>();
+  let states = new Map<number, { len: number; moves: number[] }>([[p.start, { len: 0, moves: [] }]]);
+  for (let leg = 0; leg < p.S; leg++) {
+    const next = new Map<number, { len: number; moves: number[] }>();
+    for (const mt of p.mounts[leg]) {
+      for (const [face, st] of states) {
+        const path = legPath(p, face, mt.entry, memo);
+        if (!path) continue;
+        const len = st.len + path.len + mt.len;
+        const prev = next.get(mt.exit);
+        if (!prev || len < prev.len) next.set(mt.exit, { len, moves: [...st.moves, ...path.moves, stationMove(mt.station, mt.rev)] });
+      }
+    }
+    states = next;
+  }
+  let best: { len: number; moves: number[] } | null = null;
+  for (const [face, st] of states) {
+    const path = legPath(p, face, p.camEntry, memo);
+    if (path && (!best || st.len + path.len < best.len)) best = { len: st.len + path.len, moves: [...st.moves, ...path.moves] };
+  }
+  return best?.moves ?? null;
+}
+
+function withinLimits(p: Problem, moves: readonly number[]): boolean {
+  const m = p.model;
+  const count = new Map<number, number>();
+  let parts = 0;
+  for (const mv of moves) {
+    if (mv < 0) continue;
+    parts++;
+    const part = m.oPart[mv];
+    const c = (count.get(part) ?? 0) + 1;
+    if (c > m.quantity[part]) return false;
+    count.set(part, c);
+  }
+  return parts <= p.maxParts;
+}
+
+/**
+ * Exact least-length chain under stock and maxParts: depth-first branch and bound over
+ * simple paths per leg (a repeated face or a spacer never shortens a chain), bounded below
+ * by the relaxed least length with the parts left.
+ */
+export function constrainedShortest(p: Problem, t: Tables, ignoreStock = false): number[] | null {
+  const m = p.model;
+  const W = t.R + 1;
+  const used = new Int32Array(m.parts.length);
+  const onPath = p.rel.map(() => new Uint8Array(p.faces.size));
+  const moves: number[] = [];
+  let best = Infinity;
+  let bestMoves: number[] | null = null;
+
+  const dfs = (leg: number, f: number, cmin: number, u: number): void => {
+    const li = p.loc[leg][f];
+    if (li < 0) return;
+    const budget = p.maxParts - u;
+    if (cmin + t.minLenAtMost[leg][li * W + budget] >= best) return;
+    if (leg === p.S && f === p.camEntry) {
+      best = cmin + p.camLen;
+      bestMoves = moves.slice();
+      return;
+    }
+    onPath[leg][f] = 1;
+    if (budget > 0 && f < m.faces.size) {
+      for (let g = m.faceOut[f]; g < m.faceOut[f + 1]; g++) {
+        const to = m.gTo[g];
+        const lt = p.loc[leg][to];
+        if (to === f || lt < 0 || onPath[leg][to]) continue;
+        const rest = t.minLenAtMost[leg][lt * W + budget - 1];
+        for (let o = m.gStart[g]; o < m.gEnd[g]; o++) {
+          if (cmin + m.oLen[o] + rest >= best) break;
+          const part = m.oPart[o];
+          if (!ignoreStock && used[part] >= m.quantity[part]) continue;
+          used[part]++; moves.push(o);
+          dfs(leg, to, cmin + m.oLen[o], u + 1);
+          moves.pop(); used[part]--;
+        }
+      }
+    }
+    if (leg < p.S) {
+      for (const mt of p.exits[leg]) {
+        if (mt.entry !== f) continue;
+        moves.push(stationMove(mt.station, mt.rev));
+        dfs(leg + 1, mt.exit, cmin + mt.len, u);
+        moves.pop();
+      }
+    }
+    onPath[leg][f] = 0;
+  };
+  dfs(0, p.start, 0, 0);
+  return bestMoves;
+}
+
+/** The shortest chain within every limit, or null when none exists. */
+export function findShortest(p: Problem, t: Tables): number[] | null {
+  const fast = dijkstraChain(p);
+  if (fast && withinLimits(p, fast)) return fast;
+  return constrainedShortest(p, t);
+}

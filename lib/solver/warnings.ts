@@ -1,0 +1,60 @@
+// Warnings on a finished chain. Each needs its inputs; without them it is simply not checked.
+
+import { requiredClearApertureMm } from "../optics";
+import { grams, mm, nameOf } from "./format";
+import type { Problem } from "./problem";
+import type { Chain, ChainWarning, Part } from "./types";
+
+const positive = (x: number | undefined | null): x is number => typeof x === "number" && Number.isFinite(x) && x > 0;
+
+export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]): ChainWarning[] {
+  const { optics, camera } = p.req;
+  const out: ChainWarning[] = [];
+  const N = optics.focalRatio;
+  const s = camera.sensorDiagonalMm;
+  const D = chain.sensorDistanceMm;
+
+  if (positive(N) && typeof s === "number" && s >= 0) {
+    chain.steps.forEach((step, i) => {
+      const ca = parts[i].clearApertureMm;
+      if (typeof ca !== "number") return;
+      const d = Math.max(0, D - step.startMm);
+      const need = requiredClearApertureMm(s, d, N);
+      if (ca < need - 1e-9) {
+        out.push({
+          code: "vignetting",
+          partId: step.partId,
+          message: `${nameOf(parts[i])} clears ${mm(ca)} but needs ${mm(need)} at ${mm(d)} from the sensor ` +
+            `(a ${mm(s)} diagonal plus ${mm(d)} / f/${N}), so the corners will darken.`,
+        });
+      }
+    });
+  }
+
+  if (positive(optics.imageCircleMm) && typeof s === "number" && s > optics.imageCircleMm + 1e-9) {
+    out.push({
+      code: "image-circle",
+      partId: optics.id,
+      message: `The sensor diagonal of ${mm(s)} is larger than the ${mm(optics.imageCircleMm)} image circle of ` +
+        `${nameOf(optics)}, so the corners fall outside the corrected field.`,
+    });
+  }
+
+  // The load is what hangs from the optics: every step after them. The optics' own weight
+  // does not count — they are what carries it.
+  if (typeof optics.maxLoadG === "number" && Number.isFinite(optics.maxLoadG)) {
+    let total = 0, unknown = 0;
+    for (const part of parts) {
+      if (typeof part.weightG === "number") total += part.weightG;
+      else unknown++;
+    }
+    if (total > optics.maxLoadG + 1e-9) {
+      out.push({
+        code: "load",
+        message: `The train hanging from ${nameOf(optics)} weighs ${unknown ? "at least " : ""}${grams(total)}, ` +
+          `more than the ${grams(optics.maxLoadG)} it is rated to carry.`,
+      });
+    }
+  }
+  return out;
+}
