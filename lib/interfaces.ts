@@ -70,12 +70,14 @@ export function interfaceLabel(code: string): string {
 }
 
 /**
- * Our own colour rule for interface families: hue from the nominal diameter, so that
- * neighbouring sizes look related and the code is always written beside the colour.
+ * Our own colour rule for interface families: the nominal diameter picks a stop on a wheel
+ * that skips the reds and ambers (kept for warnings), so neighbouring sizes look related.
+ * The code is always written beside the colour; colour alone never carries the meaning.
  */
+const HUE_STOPS = [188, 205, 222, 240, 258, 276, 294, 312, 52, 72, 92, 112, 140, 165];
 export function interfaceHue(code: string): number {
   const spec = BY_CODE.get(code);
   const d = spec?.diameterMm ?? 40;
   const t = Math.min(1, Math.max(0, (d - 30) / 55));
-  return Math.round(200 - t * 170);
+  return HUE_STOPS[Math.round(t * (HUE_STOPS.length - 1))];
 }
