@@ -1,0 +1,31 @@
+import type { Metadata } from "next";
+import { PageTitle } from "@/components/ui/card";
+import { Planner } from "@/components/planner/planner";
+import { getSessionUser } from "@/lib/auth/session";
+import { parsePlanParams } from "@/lib/planner/url-state";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Planner" };
+
+type Search = Record<string, string | string[] | undefined>;
+
+function toSearchParams(search: Search): URLSearchParams {
+  const out = new URLSearchParams();
+  for (const [k, v] of Object.entries(search)) {
+    if (typeof v === "string") out.set(k, v);
+    else if (Array.isArray(v) && v.length) out.set(k, v[0]);
+  }
+  return out;
+}
+
+export default async function PlanPage({ searchParams }: { searchParams: Promise<Search> }) {
+  const initial = parsePlanParams(toSearchParams(await searchParams));
+  const user = await getSessionUser().catch(() => null);
+  return (
+    <>
+      <PageTitle title="Planner"
+        lead="Choose the optics, the devices and the camera. Trainyard mates every joint and lands the sensor at the back focus — the link in your address bar reproduces this plan." />
+      <Planner initial={initial} signedIn={!!user} />
+    </>
+  );
+}

@@ -1,0 +1,45 @@
+"use client";
+// The solutions the solver ranked, one choosable card each (native radios: arrow keys work).
+import { useId } from "react";
+import type { Chain } from "@/lib/solver";
+import { formatPrice } from "@/lib/format";
+import { formatLength, type LengthUnit } from "@/lib/units";
+import { signed } from "./train-model";
+
+function connectors(chain: Chain, names: (id: string) => string): string {
+  const counts = new Map<string, number>();
+  for (const s of chain.steps) if (s.role === "connector") counts.set(s.partId, (counts.get(s.partId) ?? 0) + 1);
+  if (!counts.size) return "Nothing between the parts: they screw together as they are.";
+  return [...counts].map(([id, n]) => `${n > 1 ? `${n} × ` : ""}${names(id)}`).join(" + ");
+}
+
+export function Alternatives({ solutions, chosen, onChoose, names, unit }: {
+  solutions: Chain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
+}) {
+  const name = useId();
+  if (solutions.length < 2) return null;
+  return (
+    <fieldset>
+      <legend className="sr-only">Choose an alternative</legend>
+      <div className="grid gap-2 md:grid-cols-2">
+        {solutions.map((c, i) => (
+          <label key={i} className={`relative block cursor-pointer rounded-md border px-3 py-2.5 text-sm transition-colors has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-[var(--c-focus)] ${i === chosen ? "border-brass bg-brass/10" : "border-line bg-surface hover:border-brass/60"}`}>
+            <input type="radio" name={name} className="sr-only" checked={i === chosen} onChange={() => onChoose(i)} />
+            <span className="flex items-baseline justify-between gap-2">
+              <span className="font-semibold text-ink">{i === 0 ? "Best" : `Alternative ${i + 1}`}</span>
+              <span className="num text-xs text-muted">
+                {c.partCount} part{c.partCount === 1 ? "" : "s"} · {c.priceCents === null ? "price unknown" : c.priceCents === 0 ? "nothing to buy" : formatPrice(c.priceCents)}
+              </span>
+            </span>
+            <span className="num mt-0.5 block text-text">
+              {formatLength(c.sensorDistanceMm, unit)}
+              {c.errorMm !== null ? <span className="text-muted"> ({signed(unit === "in" ? c.errorMm / 25.4 : c.errorMm, unit === "in" ? 3 : 2)} {unit})</span> : null}
+              {c.warnings.length ? <span className="ml-2 text-warn">▲ {c.warnings.length} warning{c.warnings.length === 1 ? "" : "s"}</span> : null}
+            </span>
+            <span className="mt-1 block text-xs text-muted">{connectors(c, names)}</span>
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
+}

@@ -1,0 +1,100 @@
+"use client";
+// When nothing lands in the window: why, the nearest reachable distances, and what to change.
+import Link from "next/link";
+import type { PlanResponse } from "@/lib/planner/api-types";
+import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
+import { formatLength, type LengthUnit } from "@/lib/units";
+import { itemName } from "./train-model";
+
+/** Interfaces the reason names; failing that, every face the chosen parts offer. */
+export function interfacesInvolved(result: PlanResponse): string[] {
+  const reason = result.reason ?? "";
+  const named = INTERFACES.filter((i) => reason.includes(i.code) || reason.includes(i.name)).map((i) => i.code);
+  if (named.length) return named;
+  const ctx = result.context;
+  const faces = [ctx.items[ctx.opticsId]?.rear, ...ctx.stationIds.flatMap((id) => [ctx.items[id]?.front, ctx.items[id]?.rear]), ctx.items[ctx.cameraId]?.front];
+  return [...new Set(faces.filter((f) => !!f).map((f) => f!.interface))];
+}
+
+function Suggestion({ children }: { children: React.ReactNode }) {
+  return <li className="flex gap-2"><span aria-hidden className="text-brass-ink">→</span><span>{children}</span></li>;
+}
+
+const linkClass = "underline decoration-brass underline-offset-2 hover:text-ink";
+
+export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResponse; unit: LengthUnit; onRemoveStation: (index: number) => void }) {
+  const L = (mm: number) => formatLength(mm, unit);
+  const T = result.targetMm, tol = result.toleranceMm ?? 0;
+  const ctx = result.context;
+  const shortest = result.shortest;
+  const firstJoint = shortest?.steps[0]?.joint.interface ?? ctx.items[ctx.opticsId]?.rear?.interface;
+  const camera = ctx.items[ctx.cameraId];
+
+  let body: React.ReactNode = null;
+  if (result.status === "too-long" && T !== null && shortest) {
+    const over = shortest.sensorDistanceMm - (T + tol);
+    body = (
+      <>
+        <p>The shortest chain that joins everything is already <strong className="num">{L(shortest.sensorDistanceMm)}</strong>, <strong className="num text-bad">{L(over)}</strong> past the far edge of the window ({L(T + tol)}).</p>
+        <ul className="mt-2 space-y-1.5">
+          {ctx.stationIds.map((id, i) => {
+            const len = ctx.items[id]?.lengthMm ?? 0;
+            return (
+              <Suggestion key={`${id}-${i}`}>
+                Remove the {itemName(result, id)} ({L(len)}){len >= over ? " — that alone makes room" : " — not enough alone"}.{" "}
+                <button type="button" className={linkClass} onClick={() => onRemoveStation(i)}>Remove it</button>
+              </Suggestion>
+            );
+          })}
+          {camera ? (
+            <Suggestion>Use a camera with less depth: at most <strong className="num">{L(Math.max(0, camera.lengthMm - over))}</strong> from its front to the sensor instead of {L(camera.lengthMm)}. <Link className={linkClass} href="/parts?kind=camera">Browse cameras</Link></Suggestion>
+          ) : null}
+          <Suggestion>Or a corrector with a longer back focus than {L(T - result.filterShiftMm)}.</Suggestion>
+        </ul>
+      </>
+    );
+  } else if (result.status === "out-of-reach" && T !== null) {
+    const below = result.nearest?.belowMm ?? null, above = result.nearest?.aboveMm ?? null;
+    const spacerHref = `/parts?kind=spacer${firstJoint ? `&interface=${encodeURIComponent(firstJoint)}` : ""}`;
+    body = (
+      <>
+        <p>Chains exist, but none lands between <span className="num">{L(T - tol)}</span> and <span className="num">{L(T + tol)}</span>.</p>
+        <ul className="mt-2 space-y-1.5">
+          {below !== null ? (
+            <Suggestion>
+              The nearest below lands at <strong className="num">{L(below)}</strong>, <strong className="num">{L(T - below)}</strong> short. A spacer of <strong className="num">{L(T - below)}</strong>
+              {" "}(anything from {L(Math.max(0, T - below - tol))} to {L(T - below + tol)}) added to it closes the gap.{" "}
+              <Link className={linkClass} href={spacerHref}>Find a {firstJoint ? interfaceLabel(firstJoint) : ""} spacer</Link>
+            </Suggestion>
+          ) : null}
+          {above !== null ? <Suggestion>The nearest above lands at <strong className="num">{L(above)}</strong>, <strong className="num">{L(above - T)}</strong> too far: a thinner part in it would have to save that much.</Suggestion> : null}
+          {result.context.source === "owned" ? <Suggestion>Let the planner use the whole catalog as well as what you own.</Suggestion> : null}
+          <Suggestion>A tolerance override wider than ±{L(tol)} also counts nearer chains — only if the corrector&apos;s maker allows it.</Suggestion>
+        </ul>
+      </>
+    );
+  } else if (result.status === "no-connection") {
+    const codes = interfacesInvolved(result);
+    body = (
+      <>
+        <p>{result.reason ?? "No chain of parts mates these faces."}</p>
+        <ul className="mt-2 space-y-1.5">
+          {codes.map((code) => (
+            <Suggestion key={code}>
+              <Link className={linkClass} href={`/parts?interface=${encodeURIComponent(code)}`}>Find adapters with <span className="code">{interfaceLabel(code)}</span></Link>
+            </Suggestion>
+          ))}
+          <Suggestion>Threads mate only with the same size, pitch and the opposite gender: <span className="code">M42x1</span> does not fit <span className="code">M42x0.75</span>.</Suggestion>
+        </ul>
+      </>
+    );
+  }
+
+  return (
+    <section aria-label="What to change" className="rounded-lg border border-warn/50 bg-warn/5 p-4 text-sm text-text">
+      <h3 className="mb-1.5 font-semibold text-ink">What to change</h3>
+      {result.reason && result.status !== "no-connection" ? <p className="mb-2 text-muted">{result.reason}</p> : null}
+      {body}
+    </section>
+  );
+}

@@ -1,0 +1,142 @@
+"use client";
+// Search-as-you-type over the catalog, as an ARIA 1.2 combobox: arrows move, Enter picks,
+// Escape closes (and clears when already closed).
+import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useId, useMemo, useRef, useState } from "react";
+import type { ApiPart } from "@/lib/catalog/rows";
+import { KIND_LABELS } from "@/lib/format";
+import { interfaceLabel } from "@/lib/interfaces";
+import { formatMm } from "@/lib/units";
+import { inputClass } from "@/components/ui/field";
+import { searchParts } from "./api";
+import { useDebounced } from "./use-debounced";
+
+type Props = {
+  label: string;
+  kinds: readonly string[];
+  placeholder?: string;
+  /** Keep only some of the answers (e.g. correctors among optics). */
+  accept?: (p: ApiPart) => boolean;
+  onPick: (p: ApiPart) => void;
+  autoFocus?: boolean;
+  hint?: string;
+};
+
+export function roleOf(p: ApiPart): string {
+  const role = (p as { opticsRole?: string }).opticsRole;
+  return role ? role[0].toUpperCase() + role.slice(1) : KIND_LABELS[p.kind] ?? p.kind;
+}
+
+export function facesText(p: Pick<ApiPart, "front" | "rear">): string {
+  const face = (f: ApiPart["front"]) => f ? `${interfaceLabel(f.interface)} ${f.gender === "male" ? "♂" : "♀"}` : "—";
+  return `${face(p.front)} → ${face(p.rear)}`;
+}
+
+export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFocus, hint }: Props) {
+  const id = useId();
+  const listId = `${id}-list`;
+  const queryClient = useQueryClient();
+  const [text, setText] = useState("");
+  const [open, setOpen] = useState(false);
+  const [active, setActive] = useState(0);
+  const inputRef = useRef<HTMLInputElement>(null);
+  const q = useDebounced(text, 220);
+
+  const query = useQuery({
+    queryKey: ["parts-search", kinds.join("+"), q],
+    queryFn: ({ signal }) => searchParts(kinds, q, signal),
+    enabled: open,
+    placeholderData: keepPreviousData,
+    staleTime: 60_000,
+  });
+  const options = useMemo(() => {
+    const all = query.data ?? [];
+    return (accept ? all.filter(accept) : all).slice(0, 40);
+  }, [query.data, accept]);
+  const activeIndex = Math.min(active, Math.max(0, options.length - 1));
+
+  function pick(p: ApiPart) {
+    queryClient.setQueryData(["part", p.slug], p);
+    onPick(p);
+    setText("");
+    setOpen(false);
+    setActive(0);
+  }
+
+  function onKeyDown(e: React.KeyboardEvent<HTMLInputElement>) {
+    if (e.key === "ArrowDown" || e.key === "ArrowUp") {
+      e.preventDefault();
+      if (!open) { setOpen(true); return; }
+      const n = options.length;
+      if (n) setActive((activeIndex + (e.key === "ArrowDown" ? 1 : n - 1)) % n);
+    } else if (e.key === "Enter") {
+      if (open && options[activeIndex]) { e.preventDefault(); pick(options[activeIndex]); }
+    } else if (e.key === "Escape") {
+      if (open) { e.preventDefault(); setOpen(false); } else setText("");
+    } else if (e.key === "Home" && open && options.length) {
+      setActive(0);
+    } else if (e.key === "End" && open && options.length) {
+      setActive(options.length - 1);
+    }
+  }
+
+  const optionId = (i: number) => `${id}-opt-${i}`;
+  const waiting = query.isFetching && (q !== text || !query.data);
+
+  return (
+    <div className="relative">
+      <label htmlFor={`${id}-input`} className="sr-only">{label}</label>
+      <input
+        ref={inputRef}
+        id={`${id}-input`}
+        role="combobox"
+        aria-expanded={open}
+        aria-controls={listId}
+        aria-autocomplete="list"
+        aria-activedescendant={open && options[activeIndex] ? optionId(activeIndex) : undefined}
+        aria-describedby={hint ? `${id}-hint` : undefined}
+        autoComplete="off"
+        autoFocus={autoFocus}
+        className={inputClass}
+        placeholder={placeholder ?? "Type a maker, model or thread…"}
+        value={text}
+        onChange={(e) => { setText(e.target.value); setOpen(true); setActive(0); }}
+        onFocus={() => setOpen(true)}
+        onClick={() => setOpen(true)}
+        onBlur={() => setTimeout(() => setOpen(false), 120)}
+        onKeyDown={onKeyDown}
+      />
+      {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}
+      {open ? (
+        <div className="absolute left-0 right-0 z-30 mt-1 overflow-hidden rounded-md border border-line bg-surface shadow-lg shadow-black/10">
+          <ul id={listId} role="listbox" aria-label={label} className="max-h-72 overflow-y-auto py-1">
+            {options.map((p, i) => (
+              <li
+                key={p.slug}
+                id={optionId(i)}
+                role="option"
+                aria-selected={i === activeIndex}
+                onMouseDown={(e) => { e.preventDefault(); pick(p); }}
+                onMouseEnter={() => setActive(i)}
+                className={`cursor-pointer px-3 py-2 text-sm ${i === activeIndex ? "bg-sunken shadow-[inset_3px_0_0_var(--c-brass)]" : ""}`}
+              >
+                <span className="block font-medium text-ink">{p.name}</span>
+                <span className="mt-0.5 flex flex-wrap gap-x-3 text-xs text-muted">
+                  <span>{roleOf(p)}</span>
+                  <span className="code">{facesText(p)}</span>
+                  {p.kind !== "optics" || p.lengthMm ? <span className="num">{formatMm(p.lengthMm)}{p.adjustMm ? ` +${p.adjustMm}` : ""}</span> : null}
+                </span>
+              </li>
+            ))}
+          </ul>
+          <div role="status" aria-live="polite" className="border-t border-line/70 px-3 py-1.5 text-xs text-muted empty:hidden">
+            {query.isError ? `The catalog did not answer: ${(query.error as Error).message}`
+              : waiting ? "Searching the catalog…"
+                : options.length === 0 ? (text ? `Nothing matches “${text}”.` : "No parts of this kind yet.")
+                  : `${options.length} found${options.length === 40 ? " — type to narrow" : ""}`}
+          </div>
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+"use client";
+// The right column: verdict, diagram, budget strip, steps, warnings, alternatives, parts and cautions.
+import { useMemo, type ReactNode } from "react";
+import type { PlanResponse } from "@/lib/planner/api-types";
+import type { PlanState, SolveApiRequest } from "@/lib/planner/url-state";
+import { SafetyNote } from "@/components/safety-note";
+import { Alternatives } from "./alternatives";
+import { BudgetStrip } from "./budget-strip";
+import { NoSolution } from "./no-solution";
+import { PartsList } from "./parts-list";
+import { ChainWarnings, OpticsFacts } from "./plan-facts";
+import { StepsTable } from "./steps-table";
+import { TrainDiagram } from "./train-diagram";
+import { buildTrain, itemName, shownChain } from "./train-model";
+import { Verdict } from "./verdict";
+
+export type RenderActions = (args: { request: object; solutionIndex: number; result: PlanResponse }) => ReactNode;
+
+function Section({ title, aside, children, id }: { title: string; aside?: ReactNode; children: ReactNode; id: string }) {
+  return (
+    <section aria-labelledby={id} className="rounded-lg border border-line bg-surface p-4 sm:p-5">
+      <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+        <h2 id={id} className="text-base font-semibold text-ink">{title}</h2>
+        {aside ? <div className="text-xs text-muted">{aside}</div> : null}
+      </div>
+      {children}
+    </section>
+  );
+}
+
+export function PlanResults({ result, state, update, request, renderActions }: {
+  result: PlanResponse; state: PlanState; update: (p: Partial<PlanState>) => void;
+  request: SolveApiRequest; renderActions?: RenderActions;
+}) {
+  const { chain, index, isSolution } = shownChain(result, state.alt);
+  const train = useMemo(() => buildTrain(result, chain), [result, chain]);
+  const names = (id: string) => itemName(result, id);
+  const unit = state.unit;
+  const load = chain?.warnings.find((w) => w.code === "load");
+  const diagramLabel = `The train from sky to sensor: ${train.items.map((i) => i.name).join(", then ")}`;
+
+  return (
+    <div className="space-y-4">
+      <Verdict result={result} chain={chain} index={index} unit={unit} onUnit={(u) => update({ unit: u })} />
+      {load ? (
+        <div role="alert" className="rounded-lg border-2 border-bad/60 bg-bad/5 p-4 text-sm">
+          <p className="font-semibold text-bad">▲ Heavier than the focuser is rated for</p>
+          <p className="mt-1 text-text">{load.message}</p>
+          <div className="mt-2"><SafetyNote /></div>
+        </div>
+      ) : null}
+      {result.status !== "ok" ? <NoSolution result={result} unit={unit} onRemoveStation={(i) => update({ stations: state.stations.filter((_, j) => j !== i) })} /> : null}
+      {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
+
+      <Section id="plan-diagram" title="The train" aside={isSolution ? null : chain ? "The shortest connection — it misses the window" : "Not connected"}>
+        <TrainDiagram train={train} unit={unit} label={diagramLabel} />
+      </Section>
+
+      {chain ? (
+        <Section id="plan-budget" title="Back focus budget" aside={result.targetMm === null ? "no back focus set by these optics" : `${result.solutions.length ? "chosen chain" : "shortest chain"}, to scale`}>
+          <BudgetStrip chain={chain} names={names} targetMm={result.targetMm} toleranceMm={result.toleranceMm}
+            filterShiftMm={result.filterShiftMm} nearest={result.status === "ok" ? null : result.nearest} unit={unit} />
+        </Section>
+      ) : null}
+
+      <Section id="plan-steps" title="Step by step" aside={unit === "in" ? "inches, to 0.001" : "millimetres, to 0.1"}>
+        <StepsTable train={train} result={result} unit={unit} />
+      </Section>
+
+      <Section id="plan-checks" title="Checks and numbers">
+        <div className="space-y-3">
+          <ChainWarnings chain={chain} names={names} />
+          <OpticsFacts ctx={result.context} train={train} />
+        </div>
+      </Section>
+
+      {result.solutions.length > 1 ? (
+        <Section id="plan-alts" title="Alternatives" aside={`${result.solutions.length} that land in the window, best first`}>
+          <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} />
+        </Section>
+      ) : null}
+
+      {chain ? (
+        <Section id="plan-parts" title="Parts" aside={result.context.source === "owned" ? "your parts count as free" : "list prices"}>
+          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} />
+        </Section>
+      ) : null}
+
+      {load ? null : <SafetyNote />}
+    </div>
+  );
+}
