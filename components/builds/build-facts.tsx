@@ -1,0 +1,36 @@
+import { landsInside, signedMm } from "@/lib/builds/train";
+import { formatGrams, formatMm } from "@/lib/format";
+import type { PlanResponse } from "@/lib/planner/api-types";
+import type { Chain } from "@/lib/solver/types";
+
+/** The numbers an expert checks first: where the sensor lands against the window, and the optics. */
+export function BuildFacts({ result, chain }: { result: PlanResponse; chain: Chain }) {
+  const ctx = result.context;
+  const inside = landsInside(chain, result.toleranceMm);
+  const weight = chain.steps.reduce((g, s) => g + (ctx.items[s.partId]?.weightG ?? 0), 0);
+  const facts: { label: string; value: string; note?: string; tone?: "ok" | "bad" }[] = [
+    {
+      label: "Sensor lands at", value: formatMm(chain.sensorDistanceMm, 2),
+      note: chain.errorMm === null ? "no back focus to meet" : `${signedMm(chain.errorMm)} mm from target`, tone: inside ? "ok" : "bad",
+    },
+    ...(result.targetMm !== null ? [{
+      label: "Target", value: `${result.targetMm.toFixed(2)} ± ${(result.toleranceMm ?? 0).toFixed(2)} mm`,
+      note: result.filterShiftMm > 0 ? `back focus ${(result.targetMm - result.filterShiftMm).toFixed(2)} + ${result.filterShiftMm.toFixed(2)} for filter glass` : "back focus, no filter glass",
+    }] : []),
+    { label: "Connecting parts", value: String(chain.partCount), note: chain.partCount === 0 ? "the items mate directly" : undefined },
+    ...(ctx.focalLengthMm ? [{ label: "Focal length", value: formatMm(ctx.focalLengthMm, 0), note: ctx.focalRatio ? `f/${ctx.focalRatio.toFixed(1)}` : undefined }] : []),
+    ...(ctx.plateScaleArcsecPerPx ? [{ label: "Image scale", value: `${ctx.plateScaleArcsecPerPx.toFixed(2)}″/px`, note: ctx.fieldOfViewDeg ? `field ${ctx.fieldOfViewDeg.width.toFixed(2)}° × ${ctx.fieldOfViewDeg.height.toFixed(2)}°` : undefined }] : []),
+    ...(weight > 0 ? [{ label: "Weight behind the optics", value: formatGrams(weight), note: ctx.maxLoadG ? `focuser rated ${formatGrams(ctx.maxLoadG)}` : undefined }] : []),
+  ];
+  return (
+    <dl className="grid grid-cols-2 gap-px overflow-hidden rounded-lg border border-line bg-line sm:grid-cols-3 lg:grid-cols-6">
+      {facts.map((f) => (
+        <div key={f.label} className="bg-surface px-4 py-3">
+          <dt className="text-xs text-muted">{f.label}</dt>
+          <dd className={`num mt-0.5 text-lg font-semibold ${f.tone === "ok" ? "text-ok" : f.tone === "bad" ? "text-bad" : "text-ink"}`}>{f.value}</dd>
+          {f.note ? <dd className="num text-xs text-muted">{f.note}</dd> : null}
+        </div>
+      ))}
+    </dl>
+  );
+}

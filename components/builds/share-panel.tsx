@@ -1,0 +1,23 @@
+"use client";
+import { CopyButton } from "./copy-button";
+
+/** The link and ready-made snippets (link + preview image) for forums and pages. */
+export function SharePanel({ url, markdown, html, previewable }: { url: string; markdown: string; html: string; previewable: boolean }) {
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-center gap-2">
+        <input readOnly value={url} aria-label="Link to this build" onFocus={(e) => e.currentTarget.select()}
+          className="code min-w-0 flex-1 rounded-md border border-line bg-sunken px-3 py-1.5 text-sm text-text" />
+        <CopyButton text={url} label="Copy link" />
+      </div>
+      {previewable ? (
+        <div className="flex flex-wrap gap-2">
+          <CopyButton text={markdown} label="Copy Markdown" />
+          <CopyButton text={html} label="Copy HTML" />
+        </div>
+      ) : (
+        <p className="text-xs text-muted">Private builds have no preview image: make the build unlisted or public to paste it with a picture.</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,30 @@
+// Who may see and change a build. Pure rules; the queries apply the same ones in SQL.
+import type { BuildVisibility } from "@/lib/validation/builds";
+
+export type BuildViewer = { id: string; role: "member" | "moderator" | "admin" } | null;
+type BuildLike = { ownerId: string; visibility: string; hiddenAt: Date | null };
+
+export const isModeratorRole = (viewer: BuildViewer) => viewer?.role === "moderator" || viewer?.role === "admin";
+export const isOwner = (build: BuildLike, viewer: BuildViewer) => !!viewer && viewer.id === build.ownerId;
+
+/** Private builds: the owner and moderators. Hidden builds: the same. Others: anyone with the link. */
+export function canViewBuild(build: BuildLike, viewer: BuildViewer): boolean {
+  if (isOwner(build, viewer) || isModeratorRole(viewer)) return true;
+  return build.visibility !== "private" && !build.hiddenAt;
+}
+
+/** The owner edits and deletes; an admin may also delete. */
+export function canDeleteBuild(build: BuildLike, viewer: BuildViewer): boolean {
+  return isOwner(build, viewer) || viewer?.role === "admin";
+}
+
+/** Preview images are for pasting in public places: never for private or hidden builds. */
+export function hasPublicPreview(build: { visibility: string; hiddenAt: Date | null }): boolean {
+  return (build.visibility as BuildVisibility) !== "private" && !build.hiddenAt;
+}
+
+/** The parts of a signed-in user the rules read. */
+export function toBuildViewer(user: { id: string; role: string } | null): BuildViewer {
+  if (!user) return null;
+  return { id: user.id, role: user.role === "admin" || user.role === "moderator" ? user.role : "member" };
+}

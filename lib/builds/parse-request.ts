@@ -1,0 +1,29 @@
+// A saved build's `request` is the body of POST /api/v1/solve: validate it with the same schemas.
+import { AppError, fieldErrorsOf } from "@/lib/errors";
+import type { PlanInput } from "@/lib/planner/run-plan";
+import { planExtrasSchema, splitPlanExtras } from "@/lib/validation/plan";
+import { solveApiRequestSchema } from "@/lib/validation/solve";
+
+const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in v;
+
+/**
+ * Parse a solve request for saving as a build. Field errors are prefixed with `prefix`
+ * (e.g. "request.optics.partId"). Optics and camera must be catalog references so that the
+ * build can name its parts and be re-checked when the catalog changes.
+ */
+export function parseBuildPlanRequest(raw: unknown, prefix = "request"): PlanInput {
+  const { extras, rest } = splitPlanExtras(raw);
+  const parsedExtras = planExtrasSchema.safeParse(extras);
+  const parsed = solveApiRequestSchema.safeParse(rest);
+  if (!parsed.success || !parsedExtras.success) {
+    const issues = [...(parsed.success ? [] : parsed.error.issues), ...(parsedExtras.success ? [] : parsedExtras.error.issues)];
+    throw new AppError("bad_request:validation", "The plan to save needs attention.",
+      fieldErrorsOf(issues.map((i) => ({ ...i, path: [prefix, ...i.path] }))));
+  }
+  const input = { ...parsed.data, ...parsedExtras.data } as PlanInput;
+  const fields: Record<string, string[]> = {};
+  if (!isRef(input.optics)) fields[`${prefix}.optics`] = ["Choose the optics from the catalog ({ partId })"];
+  if (!isRef(input.camera)) fields[`${prefix}.camera`] = ["Choose the camera from the catalog ({ partId })"];
+  if (Object.keys(fields).length) throw new AppError("bad_request:validation", "A build is made of catalog parts.", fields);
+  return input;
+}
