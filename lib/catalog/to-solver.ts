@@ -5,7 +5,7 @@ import type { PlanContext, PlanItem } from "@/lib/planner/api-types";
 import type { PartRowLike } from "./rows";
 
 /** Kinds the solver may use to fill gaps; devices, optics and cameras are chosen by the user. */
-export const CONNECTOR_KINDS = new Set(["adapter", "spacer", "extension", "other"]);
+export const CONNECTOR_KINDS = new Set(["adapter", "spacer", "extension"]);
 export const STATION_KINDS = new Set(["filter-wheel", "filter-drawer", "oag", "tilt-plate", "diagonal", "other", "adapter", "extension", "spacer"]);
 
 const port = (i: string | null, g: string | null) => (i && (g === "male" || g === "female") ? { interface: i, gender: g } as const : null);

@@ -1,5 +1,6 @@
 // Seed sanity: the demo catalog parses, uses only registered interfaces, follows the trade's
 // published dimensions, and its demo cases behave as they claim.
+import { CONNECTOR_KINDS as PLANNER_CONNECTOR_KINDS } from "@/lib/catalog/to-solver";
 import { describe, expect, it } from "vitest";
 import { getInterface, INTERFACE_CODES, INTERFACES } from "@/lib/interfaces";
 import { partInputSchema, type PartInput } from "@/lib/validation/parts";
@@ -220,8 +221,8 @@ describe("demo catalog: the trade's conventions (common practice)", () => {
 // what its story says. Focus shift of a plate: t·(n − 1)/n with n = 1.5 (W. J. Smith,
 // Modern Optical Engineering, §7.8); 2 mm → 0.667 mm.
 type Port = { interface: string; gender: "male" | "female" };
-// The kinds the planner lets the solver use as fillers (as in lib/catalog/to-solver.ts).
-const CONNECTOR_KINDS: string[] = ["adapter", "spacer", "extension", "other"];
+// The kinds the planner lets the solver use as fillers.
+const CONNECTOR_KINDS = [...PLANNER_CONNECTOR_KINDS];
 const mates = (open: Port, front: Port | null) => !!front && front.interface === open.interface && front.gender !== open.gender;
 const orientations = (p: PartInput) => (p.reversible ? [[p.front!, p.rear!], [p.rear!, p.front!]] : [[p.front!, p.rear!]]);
 
