@@ -74,7 +74,7 @@ export function BudgetStrip({ chain, names, targetMm, toleranceMm, filterShiftMm
             {filterShiftMm > 0 && B !== null ? <rect x={x(B)} y={20} width={Math.max(2, filterShiftMm * px)} height={8} fill={`url(#${hatch})`} stroke="var(--c-glass-ink)" strokeWidth={0.8} /> : null}
             {filterShiftMm > 0 && B !== null ? <text x={x(B) - 4} y={27} textAnchor="end" fontSize="10" fill="var(--c-glass-ink)" className="num">filter +{short(filterShiftMm)}</text> : null}
             <line x1={x(targetMm)} x2={x(targetMm)} y1={14} y2={84} stroke="var(--c-ink)" strokeWidth={1.5} />
-            <text x={clampX(x(targetMm), 70)} y={11} textAnchor="middle" fontSize="11" fontWeight={600} fill="var(--c-ink)" className="num">{targetText}</text>
+            <text x={clampX(x(targetMm), targetText.length * 3.3 + 4)} y={11} textAnchor="middle" fontSize="11" fontWeight={600} fill="var(--c-ink)" className="num">{targetText}</text>
           </g>
         ) : null}
         {[nearest?.belowMm, nearest?.aboveMm].map((n, i) => n === null || n === undefined || Math.abs(n - D) < 1e-6 ? null : (
@@ -96,7 +96,7 @@ export function BudgetStrip({ chain, names, targetMm, toleranceMm, filterShiftMm
         <g data-testid="sensor-marker">
           <line x1={x(D)} x2={x(D)} y1={28} y2={122} stroke={mark} strokeWidth={2.5} />
           <path d={`M${x(D)},120 l-7,11 h14 z`} fill={mark} />
-          <text x={clampX(x(D), 95)} y={145} textAnchor="middle" fontSize="12" fontWeight={600} fill={mark} className="num">{sensorText}{inside ? "" : " — outside"}</text>
+          <text x={clampX(x(D), (sensorText.length + (inside ? 0 : 10)) * 3.4 + 4)} y={145} textAnchor="middle" fontSize="12" fontWeight={600} fill={mark} className="num">{sensorText}{inside ? "" : " — outside"}</text>
         </g>
       </svg>
       {targetMm !== null && toleranceMm !== null ? (

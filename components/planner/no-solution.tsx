@@ -24,6 +24,8 @@ const linkClass = "underline decoration-brass underline-offset-2 hover:text-ink"
 
 export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResponse; unit: LengthUnit; onRemoveStation: (index: number) => void }) {
   const L = (mm: number) => formatLength(mm, unit);
+  /** Finer, for windows and gaps that are fractions of a millimetre. */
+  const F = (mm: number) => (unit === "in" ? formatLength(mm, "in") : `${mm.toFixed(2)} mm`);
   const T = result.targetMm, tol = result.toleranceMm ?? 0;
   const ctx = result.context;
   const shortest = result.shortest;
@@ -35,7 +37,7 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
     const over = shortest.sensorDistanceMm - (T + tol);
     body = (
       <>
-        <p>The shortest chain that joins everything is already <strong className="num">{L(shortest.sensorDistanceMm)}</strong>, <strong className="num text-bad">{L(over)}</strong> past the far edge of the window ({L(T + tol)}).</p>
+        <p>The shortest chain that joins everything is already <strong className="num">{L(shortest.sensorDistanceMm)}</strong>, <strong className="num text-bad">{F(over)}</strong> past the far edge of the window ({F(T + tol)}).</p>
         <ul className="mt-2 space-y-1.5">
           {ctx.stationIds.map((id, i) => {
             const len = ctx.items[id]?.lengthMm ?? 0;
@@ -58,18 +60,18 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
     const spacerHref = `/parts?kind=spacer${firstJoint ? `&interface=${encodeURIComponent(firstJoint)}` : ""}`;
     body = (
       <>
-        <p>Chains exist, but none lands between <span className="num">{L(T - tol)}</span> and <span className="num">{L(T + tol)}</span>.</p>
+        <p>Chains exist, but none lands between <span className="num">{F(T - tol)}</span> and <span className="num">{F(T + tol)}</span>.</p>
         <ul className="mt-2 space-y-1.5">
           {below !== null ? (
             <Suggestion>
-              The nearest below lands at <strong className="num">{L(below)}</strong>, <strong className="num">{L(T - below)}</strong> short. A spacer of <strong className="num">{L(T - below)}</strong>
-              {" "}(anything from {L(Math.max(0, T - below - tol))} to {L(T - below + tol)}) added to it closes the gap.{" "}
+              The nearest below lands at <strong className="num">{F(below)}</strong>, <strong className="num">{F(T - below)}</strong> short. A spacer of <strong className="num">{F(T - below)}</strong>
+              {" "}(anything from {F(Math.max(0, T - below - tol))} to {F(T - below + tol)}) added to it closes the gap.{" "}
               <Link className={linkClass} href={spacerHref}>Find a {firstJoint ? interfaceLabel(firstJoint) : ""} spacer</Link>
             </Suggestion>
           ) : null}
-          {above !== null ? <Suggestion>The nearest above lands at <strong className="num">{L(above)}</strong>, <strong className="num">{L(above - T)}</strong> too far: a thinner part in it would have to save that much.</Suggestion> : null}
+          {above !== null ? <Suggestion>The nearest above lands at <strong className="num">{F(above)}</strong>, <strong className="num">{F(above - T)}</strong> too far: a thinner part in it would have to save that much.</Suggestion> : null}
           {result.context.source === "owned" ? <Suggestion>Let the planner use the whole catalog as well as what you own.</Suggestion> : null}
-          <Suggestion>A tolerance override wider than ±{L(tol)} also counts nearer chains — only if the corrector&apos;s maker allows it.</Suggestion>
+          <Suggestion>A tolerance override wider than ±{F(tol)} also counts nearer chains — only if the corrector&apos;s maker allows it.</Suggestion>
         </ul>
       </>
     );
@@ -77,7 +79,7 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
     const codes = interfacesInvolved(result);
     body = (
       <>
-        <p>{result.reason ?? "No chain of parts mates these faces."}</p>
+        <p>{result.reason ? "Adapters that could close the gap:" : "No chain of parts mates these faces."}</p>
         <ul className="mt-2 space-y-1.5">
           {codes.map((code) => (
             <Suggestion key={code}>
@@ -93,7 +95,6 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
   return (
     <section aria-label="What to change" className="rounded-lg border border-warn/50 bg-warn/5 p-4 text-sm text-text">
       <h3 className="mb-1.5 font-semibold text-ink">What to change</h3>
-      {result.reason && result.status !== "no-connection" ? <p className="mb-2 text-muted">{result.reason}</p> : null}
       {body}
     </section>
   );

@@ -1,8 +1,8 @@
 "use client";
 // The train as a flow diagram: sky on the left, sensor on the right, one node per item,
 // each joint labelled with its interface and which side is male.
-import { ReactFlow } from "@xyflow/react";
-import { useMemo } from "react";
+import { ReactFlow, type Viewport } from "@xyflow/react";
+import { useEffect, useMemo, useState } from "react";
 import type { LengthUnit } from "@/lib/units";
 import type { Train, TrainItem } from "./train-model";
 import { useWidth } from "./use-width";
@@ -57,12 +57,18 @@ function viewportFor(l: Layout, W: number, H: number) {
 }
 
 export function TrainDiagram({ train, unit, label }: { train: Train; unit: LengthUnit; label: string }) {
+  const connected = train.connected;
   const layout = useMemo(() => layoutTrain(train, unit), [train, unit]);
   const { nodes, edges } = layout;
   const [ref, W] = useWidth<HTMLDivElement>();
   const H = W < 640 ? 230 : 290;
-  const { viewport, overflow } = viewportFor(layout, W, H);
-  const signature = `${W}|${nodes.map((n) => `${n.id}:${n.data.item.itemId}:${n.data.item.lengthMm}`).join("|")}`;
+  const fitted = viewportFor(layout, W, H);
+  const signature = nodes.map((n) => `${n.id}:${n.data.item.itemId}:${n.data.item.lengthMm}`).join("|");
+  // Controlled, so a new train or a new width re-frames it while the reader can still pan.
+  const [viewport, setViewport] = useState<Viewport>(fitted.viewport);
+  const { x, y, zoom } = fitted.viewport;
+  useEffect(() => setViewport({ x, y, zoom }), [signature, x, y, zoom]);
+  const overflow = fitted.overflow;
   return (
     <figure className="m-0">
       <div ref={ref} data-testid="train-diagram" data-items={nodes.length} aria-label={label} role="group" style={{ height: H }}
@@ -70,12 +76,12 @@ export function TrainDiagram({ train, unit, label }: { train: Train; unit: Lengt
         <span aria-hidden className="pointer-events-none absolute left-3 top-2 z-10 text-[10px] font-medium uppercase tracking-[0.2em] text-muted">☾ Sky</span>
         <span aria-hidden className="pointer-events-none absolute right-3 top-2 z-10 text-[10px] font-medium uppercase tracking-[0.2em] text-muted">Sensor ▣</span>
         <ReactFlow
-          key={signature}
           nodes={nodes}
           edges={edges}
           nodeTypes={nodeTypes}
           edgeTypes={edgeTypes}
-          defaultViewport={viewport}
+          viewport={viewport}
+          onViewportChange={setViewport}
           minZoom={0.3}
           maxZoom={2}
           nodesDraggable={false}
@@ -87,12 +93,11 @@ export function TrainDiagram({ train, unit, label }: { train: Train; unit: Lengt
           zoomOnDoubleClick={false}
           preventScrolling={false}
           panOnDrag
-          proOptions={{ hideAttribution: true }}
         />
       </div>
       <figcaption className="mt-1.5 text-xs text-muted">
         {overflow ? <strong className="font-medium text-text">Drag sideways to follow the train to the sensor. </strong> : null}
-        Box widths grow with length; the strip below is to scale. Each joint reads sky side → sensor side: ♂ male, ♀ female.
+        Box widths grow with length{connected ? "; the budget below is to scale" : ""}. Each joint reads sky side → sensor side: ♂ male, ♀ female.
       </figcaption>
     </figure>
   );

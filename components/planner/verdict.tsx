@@ -43,7 +43,16 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         </div>
       </div>
       <p className="mt-2 text-lg leading-snug text-text sm:text-xl" aria-live="polite">
-        {chain && T !== null ? (
+        {result.status === "out-of-reach" && T !== null && result.nearest ? (
+          <>
+            Closest reachable{" "}
+            {result.nearest.belowMm !== null ? <><Big mm={result.nearest.belowMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.belowMm - T) / 25.4 : result.nearest.belowMm - T, unit === "in" ? 3 : 2)})</span></> : null}
+            {result.nearest.belowMm !== null && result.nearest.aboveMm !== null ? " and " : null}
+            {result.nearest.aboveMm !== null ? <><Big mm={result.nearest.aboveMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.aboveMm - T) / 25.4 : result.nearest.aboveMm - T, unit === "in" ? 3 : 2)})</span></> : null}
+            {" "}<span className="text-muted">—</span> target <Big mm={T} unit={unit} /><span className="num text-muted"> ± {tolText}</span>{" "}
+            <span className="text-muted">—</span> <span className="font-semibold text-bad">nothing lands in the window</span>
+          </>
+        ) : chain && T !== null ? (
           <>
             Sensor at <Big mm={chain.sensorDistanceMm} unit={unit} /> <span className="text-muted">—</span> target <Big mm={T} unit={unit} />
             <span className="num text-muted"> ± {tolText}</span> <span className="text-muted">—</span>{" "}
@@ -55,7 +64,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         ) : chain ? (
           <>Connected: sensor <Big mm={chain.sensorDistanceMm} unit={unit} digits={1} /> behind the focuser&apos;s joint <span className="text-base text-muted">— this optic sets no back focus, so the focuser takes up the rest.</span></>
         ) : (
-          <span className="text-bad">{result.reason ?? "No chain joins these parts."}</span>
+          <span className="text-ink">{result.reason ?? "No chain joins these parts."}</span>
         )}
       </p>
       {chain && result.status === "ok" ? (
