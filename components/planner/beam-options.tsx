@@ -8,6 +8,8 @@ import { NumberField } from "./number-field";
 
 type Update = (patch: Partial<PlanState>) => void;
 
+const RADIO = "mt-1 h-3.5 w-3.5 shrink-0 appearance-none rounded-full border border-muted bg-surface checked:border-4 checked:border-brass disabled:border-line disabled:bg-sunken";
+
 export const MATERIALS = [
   { label: "N-BK7", n: 1.5168 },
   { label: "Fused silica", n: 1.458 },
@@ -95,11 +97,11 @@ export function BeamOptions({ state, update, signedIn, signInHref, opticsToleran
         <legend className="mb-1.5 text-sm font-semibold text-ink">Draw the parts from</legend>
         <div className="space-y-1.5 text-sm">
           <label className="flex cursor-pointer items-start gap-2">
-            <input type="radio" name={`${id}-source`} className="mt-1 accent-[var(--c-brass)]" checked={state.source === "catalog"} onChange={() => update({ source: "catalog" })} />
+            <input type="radio" name={`${id}-source`} className={RADIO} checked={state.source === "catalog"} onChange={() => update({ source: "catalog" })} />
             <span>The whole catalog<span className="block text-xs text-muted">Every adapter, spacer and extension, at list prices.</span></span>
           </label>
           <label className={`flex items-start gap-2 ${signedIn ? "cursor-pointer" : "cursor-not-allowed"}`}>
-            <input type="radio" name={`${id}-source`} className="mt-1 accent-[var(--c-brass)]" disabled={!signedIn}
+            <input type="radio" name={`${id}-source`} className={RADIO} disabled={!signedIn}
               checked={state.source === "owned"} onChange={() => update({ source: "owned" })} aria-describedby={`${id}-owned`} />
             <span className={signedIn ? "" : "text-muted"}>What I own, then the catalog
               <span id={`${id}-owned`} className="block text-xs text-muted">

@@ -104,7 +104,7 @@ export function BudgetStrip({ chain, names, targetMm, toleranceMm, filterShiftMm
           nearest={nearest} unit={unit} hatch={hatch} inside={inside} />
       ) : null}
       <p className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-muted">
-        <span>{unit === "in" ? "Inches" : "Millimetres"} from the corrector&apos;s rear joint plane (0).</span>
+        <span>{unit === "in" ? "Inches" : "Millimetres"} from the {targetMm !== null ? "corrector’s" : "optics’"} rear joint plane (0).</span>
         <Key swatch={<span className="inline-block h-2.5 w-3 border border-ok/70 bg-ok/20" />}>the window</Key>
         {filterShiftMm > 0 ? <Key swatch={<svg width="12" height="10" aria-hidden><rect width="12" height="10" fill={`url(#${hatch})`} /></svg>}>path the filter adds</Key> : null}
         <Key swatch={<span className="inline-block h-2.5 w-3 border border-ink/50" style={{ background: SEGMENT_FILL.connector }} />}>connector</Key>

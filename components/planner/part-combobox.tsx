@@ -108,7 +108,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
       />
       {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}
       {open ? (
-        <div className="absolute left-0 right-0 z-30 mt-1 overflow-hidden rounded-md border border-line bg-surface shadow-lg shadow-black/10">
+        <div className="absolute left-0 right-0 z-30 mt-1 lg:right-auto lg:w-[26rem] overflow-hidden rounded-md border border-line bg-surface shadow-lg shadow-black/10">
           <ul id={listId} role="listbox" aria-label={label} className="max-h-72 overflow-y-auto py-1">
             {options.map((p, i) => (
               <li

@@ -60,7 +60,7 @@ export function PartsList({ train, unit, owned }: { train: Train; unit: LengthUn
           <ul className="space-y-1 text-sm">
             {own.map((l) => <li key={l.id} className="flex justify-between gap-2 border-b border-line/70 py-1.5"><span>{l.count > 1 ? `${l.count} × ` : ""}{l.name}</span><span className="num text-muted">{formatLength(l.lengthMm, unit)}</span></li>)}
           </ul>
-        ) : <p className="text-sm text-muted">{owned ? "None of your own connectors fit this chain." : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
+        ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
       </div>
     </div>
   );

@@ -21,7 +21,7 @@ export function trainWeight(train: Train): { grams: number; unknown: number } {
 
 export function OpticsFacts({ ctx, train }: { ctx: PlanContext; train: Train }) {
   const rows: [string, React.ReactNode, string?][] = [];
-  if (ctx.focalLengthMm) rows.push(["Focal length", `${Math.round(ctx.focalLengthMm)} mm${ctx.focalRatio ? ` · f/${ctx.focalRatio.toFixed(1)}` : ""}`, "with the corrector's factor"]);
+  if (ctx.focalLengthMm) rows.push(["Focal length", `${Math.round(ctx.focalLengthMm)} mm${ctx.focalRatio ? ` · f/${ctx.focalRatio.toFixed(1)}` : ""}`, ctx.telescopeId ? "with the corrector's factor" : undefined]);
   if (ctx.plateScaleArcsecPerPx) rows.push(["Plate scale", `${ctx.plateScaleArcsecPerPx.toFixed(2)}″ per pixel`, ctx.pixelSizeUm ? `${ctx.pixelSizeUm} µm pixels` : undefined]);
   if (ctx.fieldOfViewDeg) rows.push(["Field of view", `${angle(ctx.fieldOfViewDeg.width)} × ${angle(ctx.fieldOfViewDeg.height)}`, `${angle(ctx.fieldOfViewDeg.diagonal)} corner to corner`]);
   if (ctx.criticalFocusZoneUm) rows.push(["Critical focus zone", `${Math.round(ctx.criticalFocusZoneUm)} µm`, "total depth at 550 nm: how finely to focus"]);
