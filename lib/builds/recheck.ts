@@ -79,7 +79,7 @@ export async function checkBuild(build: BuildRow): Promise<Verdict> {
   }
   const key = connectorKey(chain);
   const same = now.solutions.find((c) => connectorKey(c) === key);
-  if (same) return { fits: true, reason: `Still fits: the saved chain lands at ${mm(same.sensorDistanceMm)}, inside ${window(now)}.`, catalogVersion: now.context.catalogVersion };
+  if (same) return { fits: true, reason: `The saved chain lands at ${mm(same.sensorDistanceMm)}, inside ${window(now)}.`, catalogVersion: now.context.catalogVersion };
 
   const changes = describeChanges(saved, now, chain, rows);
   const changed = changes.length ? ` Changed: ${changes.join("; ")}.` : "";
@@ -90,7 +90,7 @@ export async function checkBuild(build: BuildRow): Promise<Verdict> {
   const off = now.targetMm === null ? "" : ` (${mm(Math.abs(d - now.targetMm))} too ${d > now.targetMm ? "long" : "short"})`;
   return {
     fits: false,
-    reason: `No longer fits: the saved chain now lands at ${mm(d)}, outside ${window(now)}${off}.${changed}`,
+    reason: `The saved chain now lands at ${mm(d)}, outside ${window(now)}${off}.${changed}`,
     catalogVersion: now.context.catalogVersion,
   };
 }
@@ -102,7 +102,7 @@ const ownerAsViewer = (ownerId: string): SessionUser => ({ id: ownerId, email: "
 async function alternativeHint(build: BuildRow): Promise<string> {
   try {
     const r = await runPlan({ input: build.request as PlanInput, viewer: ownerAsViewer(build.ownerId) });
-    if (r.solutions.length) return ` The catalog offers ${r.solutions.length === 1 ? "another chain that fits" : `${r.solutions.length} other chains that fit`}: open it in the planner.`;
+    if (r.solutions.length) return ` The catalog offers ${r.solutions.length === 1 ? "another chain that fits" : `${r.solutions.length} other chains that fit`}: open the build in the planner to choose one.`;
     return r.reason ? ` Nothing in the catalog fits now: ${r.reason}` : "";
   } catch {
     return "";
