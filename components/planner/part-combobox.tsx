@@ -38,7 +38,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
   const queryClient = useQueryClient();
   const [text, setText] = useState("");
   const [open, setOpen] = useState(false);
-  const [active, setActive] = useState(0);
+  const [active, setActive] = useState(-1);
   const inputRef = useRef<HTMLInputElement>(null);
   const q = useDebounced(text, 220);
 
@@ -53,14 +53,14 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
     const all = query.data ?? [];
     return (accept ? all.filter(accept) : all).slice(0, 40);
   }, [query.data, accept]);
-  const activeIndex = Math.min(active, Math.max(0, options.length - 1));
+  const activeIndex = Math.min(active, options.length - 1);
 
   function pick(p: ApiPart) {
     queryClient.setQueryData(["part", p.slug], p);
     onPick(p);
     setText("");
     setOpen(false);
-    setActive(0);
+    setActive(-1);
   }
 
   function onKeyDown(e: React.KeyboardEvent<HTMLInputElement>) {
@@ -68,9 +68,10 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
       e.preventDefault();
       if (!open) { setOpen(true); return; }
       const n = options.length;
-      if (n) setActive((activeIndex + (e.key === "ArrowDown" ? 1 : n - 1)) % n);
+      if (n) setActive(activeIndex < 0 ? (e.key === "ArrowDown" ? 0 : n - 1) : (activeIndex + (e.key === "ArrowDown" ? 1 : n - 1)) % n);
     } else if (e.key === "Enter") {
-      if (open && options[activeIndex]) { e.preventDefault(); pick(options[activeIndex]); }
+      const chosen = options[activeIndex] ?? (text.trim() ? options[0] : undefined);
+      if (open && chosen) { e.preventDefault(); pick(chosen); }
     } else if (e.key === "Escape") {
       if (open) { e.preventDefault(); setOpen(false); } else setText("");
     } else if (e.key === "Home" && open && options.length) {
@@ -93,15 +94,14 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
         aria-expanded={open}
         aria-controls={listId}
         aria-autocomplete="list"
-        aria-activedescendant={open && options[activeIndex] ? optionId(activeIndex) : undefined}
+        aria-activedescendant={open && activeIndex >= 0 && options[activeIndex] ? optionId(activeIndex) : undefined}
         aria-describedby={hint ? `${id}-hint` : undefined}
         autoComplete="off"
         autoFocus={autoFocus}
         className={inputClass}
         placeholder={placeholder ?? "Type a maker, model or thread…"}
         value={text}
-        onChange={(e) => { setText(e.target.value); setOpen(true); setActive(0); }}
-        onFocus={() => setOpen(true)}
+        onChange={(e) => { setText(e.target.value); setOpen(true); setActive(-1); }}
         onClick={() => setOpen(true)}
         onBlur={() => setTimeout(() => setOpen(false), 120)}
         onKeyDown={onKeyDown}
@@ -109,7 +109,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
       {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}
       {open ? (
         <div className="absolute left-0 right-0 z-30 mt-1 lg:right-auto lg:w-[26rem] overflow-hidden rounded-md border border-line bg-surface shadow-lg shadow-black/10">
-          <ul id={listId} role="listbox" aria-label={label} className="max-h-72 overflow-y-auto py-1">
+          <ul id={listId} role="listbox" aria-label={label} tabIndex={-1} className="max-h-72 overflow-y-auto py-1">
             {options.map((p, i) => (
               <li
                 key={p.slug}
