@@ -37,6 +37,11 @@ export function PlanResults({ result, state, update, request, renderActions }: {
   const names = (id: string) => itemName(result, id);
   const unit = state.unit;
   const load = chain?.warnings.find((w) => w.code === "load");
+  const warnedParts = useMemo(() => {
+    const out: Record<string, string> = {};
+    for (const w of chain?.warnings ?? []) if (w.partId) out[w.partId] = out[w.partId] ? `${out[w.partId]} ${w.message}` : w.message;
+    return out;
+  }, [chain]);
   const diagramLabel = `The train from sky to sensor: ${train.items.map((i) => i.name).join(", then ")}`;
 
   return (
@@ -53,7 +58,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
       {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
 
       <Section id="plan-diagram" title="The train" aside={isSolution ? null : chain ? "The shortest connection — it misses the window" : "Not connected"}>
-        <TrainDiagram train={train} unit={unit} label={diagramLabel} />
+        <TrainDiagram train={train} unit={unit} label={diagramLabel} warnings={warnedParts} />
       </Section>
 
       {chain ? (

@@ -24,7 +24,7 @@ function size(item: TrainItem): { type: keyof typeof nodeTypes; width: number; h
 
 type Layout = { nodes: TrainNode[]; edges: JointEdge[]; width: number; top: number; bottom: number };
 
-export function layoutTrain(train: Train, unit: LengthUnit): Layout {
+export function layoutTrain(train: Train, unit: LengthUnit, warnings: Record<string, string> = {}): Layout {
   const nodes: TrainNode[] = [];
   let x = 0;
   const sizes = train.items.map(size);
@@ -33,7 +33,7 @@ export function layoutTrain(train: Train, unit: LengthUnit): Layout {
     const s = sizes[i];
     nodes.push({
       id: item.key, type: s.type, position: { x, y: -s.height / 2 }, width: s.width, height: s.height,
-      data: { item, unit, width: s.width, height: s.height },
+      data: { item, unit, width: s.width, height: s.height, warning: item.role === "telescope" ? undefined : warnings[item.itemId] },
       draggable: false, selectable: false, connectable: false, focusable: false,
     });
     x += s.width + GAP;
@@ -56,9 +56,9 @@ function viewportFor(l: Layout, W: number, H: number) {
   return { viewport: { x, y, zoom }, overflow };
 }
 
-export function TrainDiagram({ train, unit, label }: { train: Train; unit: LengthUnit; label: string }) {
+export function TrainDiagram({ train, unit, label, warnings }: { train: Train; unit: LengthUnit; label: string; warnings?: Record<string, string> }) {
   const connected = train.connected;
-  const layout = useMemo(() => layoutTrain(train, unit), [train, unit]);
+  const layout = useMemo(() => layoutTrain(train, unit, warnings), [train, unit, warnings]);
   const { nodes, edges } = layout;
   const [ref, W] = useWidth<HTMLDivElement>();
   const H = W < 640 ? 230 : 290;

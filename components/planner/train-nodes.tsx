@@ -5,7 +5,7 @@ import { interfaceHue, interfaceLabel } from "@/lib/interfaces";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { jointGenders, type TrainItem, type TrainJoint } from "./train-model";
 
-export type TrainNodeData = { item: TrainItem; unit: LengthUnit; width: number; height: number };
+export type TrainNodeData = { item: TrainItem; unit: LengthUnit; width: number; height: number; warning?: string };
 export type TrainNode = Node<TrainNodeData>;
 export type JointEdgeData = { joint: TrainJoint; labelDy: number };
 export type JointEdge = Edge<JointEdgeData>;
@@ -32,7 +32,13 @@ function Caption({ item, unit, lengthNote }: { item: TrainItem; unit: LengthUnit
 }
 
 function box(data: TrainNodeData) {
-  return { width: data.width, height: data.height };
+  return { width: data.width, height: data.height, ...(data.warning ? { outline: "2px solid var(--c-warn)", outlineOffset: 3 } : {}) };
+}
+
+/** A warned item carries a small amber mark whose title says why. */
+function Mark({ data }: { data: TrainNodeData }) {
+  if (!data.warning) return null;
+  return <span title={data.warning} aria-label={`Warning: ${data.warning}`} className="absolute -right-2 -top-3 z-10 rounded-full bg-warn px-1.5 text-[10px] font-bold leading-4 text-bg">▲</span>;
 }
 
 function OpticNode({ data }: NodeProps<TrainNode>) {
@@ -40,8 +46,8 @@ function OpticNode({ data }: NodeProps<TrainNode>) {
   const note = item.role === "telescope" ? "telescope" : item.lengthMm > 0 ? `${formatLength(item.lengthMm, unit)} body` : "back focus from here";
   return (
     <div data-testid="train-node" data-role={item.role} style={box(data)}
-      className="flex items-center justify-center rounded-l-[999px] rounded-r-md border-2 border-glass bg-[color-mix(in_srgb,var(--c-glass)_14%,var(--c-surface))] pl-4">
-      <Ends />
+      className="relative flex items-center justify-center rounded-l-[999px] rounded-r-md border-2 border-glass bg-[color-mix(in_srgb,var(--c-glass)_14%,var(--c-surface))] pl-4">
+      <Ends /><Mark data={data} />
       <Caption item={item} unit={unit} lengthNote={note} />
     </div>
   );
@@ -54,8 +60,8 @@ const THREADS = { backgroundImage: `${TEETH}, ${TEETH}`, backgroundSize: "100% 5
 function ConnectorNode({ data }: NodeProps<TrainNode>) {
   return (
     <div data-testid="train-node" data-role="connector" style={{ ...box(data), ...THREADS }}
-      className="flex items-center justify-center rounded-[3px] border border-ink/60 bg-surface">
-      <Ends />
+      className="relative flex items-center justify-center rounded-[3px] border border-ink/60 bg-surface">
+      <Ends /><Mark data={data} />
       <div className="rounded bg-surface/90 py-0.5"><Caption item={data.item} unit={data.unit} /></div>
     </div>
   );
@@ -64,8 +70,8 @@ function ConnectorNode({ data }: NodeProps<TrainNode>) {
 function StationNode({ data }: NodeProps<TrainNode>) {
   return (
     <div data-testid="train-node" data-role="station" style={box(data)}
-      className="flex items-center justify-center rounded-md border-2 border-ink bg-station shadow-[inset_0_0_0_3px_var(--c-surface)]">
-      <Ends />
+      className="relative flex items-center justify-center rounded-md border-2 border-ink bg-station shadow-[inset_0_0_0_3px_var(--c-surface)]">
+      <Ends /><Mark data={data} />
       <Caption item={data.item} unit={data.unit} />
     </div>
   );
@@ -75,7 +81,7 @@ function CameraNode({ data }: NodeProps<TrainNode>) {
   return (
     <div data-testid="train-node" data-role="camera" style={box(data)}
       className="relative flex items-center justify-center rounded-l-sm rounded-r-[22px] border-2 border-ink bg-sunken pr-3">
-      <Ends />
+      <Ends /><Mark data={data} />
       <Caption item={data.item} unit={data.unit} />
       <span aria-hidden className="absolute bottom-3 right-3 top-3 w-[3px] rounded bg-ok" title="sensor" />
     </div>

@@ -72,6 +72,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
           {chain.partCount === 0 ? "No connecting parts needed" : `${chain.partCount} connecting part${chain.partCount === 1 ? "" : "s"}`}
           {toBuy !== null && toBuy !== undefined ? ` · ${toBuy === 0 ? "nothing to buy" : `${formatPrice(toBuy)} at list prices`}` : " · some prices unknown"}
           {result.solutions.length > 1 ? ` · alternative ${index + 1} of ${result.solutions.length}` : ""}
+          {chain.warnings.length ? <> · <a href="#plan-checks" className="text-warn underline underline-offset-2">▲ {chain.warnings.length} warning{chain.warnings.length === 1 ? "" : "s"}</a></> : null}
         </p>
       ) : result.reason && chain ? <p className="mt-1 text-sm text-text">{result.reason}</p> : null}
     </div>

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { Planner } from "@/components/planner/planner";
 import { getSessionUser } from "@/lib/auth/session";
-import { parsePlanParams } from "@/lib/planner/url-state";
+import { parsePlanParams, planStateToParams } from "@/lib/planner/url-state";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Planner" };
@@ -25,7 +25,8 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
     <>
       <PageTitle title="Planner"
         lead="Choose the optics, the devices and the camera. Trainyard mates every joint and lands the sensor at the back focus — the link in your address bar reproduces this plan." />
-      <Planner initial={initial} signedIn={!!user} />
+      {/* Keyed by the plan, so following a link to another plan starts from that link. */}
+      <Planner key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
     </>
   );
 }
