@@ -56,7 +56,7 @@ function GlassEditor({ title, glass, onChange, allowNone }: { title: string; gla
                   {m.label} <span className="text-xs text-muted">n {m.n}</span>
                 </Chip>
               ))}
-              <Chip pressed={otherN} onClick={() => onChange({ ...glass, refractiveIndex: otherN ? glass.refractiveIndex : 1.5 })}>Other n</Chip>
+              <Chip pressed={otherN} onClick={() => onChange({ ...glass, refractiveIndex: otherN ? glass.refractiveIndex : 1.5 })}>Other index</Chip>
             </div>
           </div>
           {otherN ? (

@@ -90,7 +90,7 @@ export function TrainChoices({ state, update }: { state: PlanState; update: Upda
           </ol>
         ) : null}
         {state.stations.length < MAX_STATIONS ? (
-          <PartCombobox label="Add a device" kinds={STATION_KINDS} placeholder="Add a filter wheel, drawer, guider, tilt plate…"
+          <PartCombobox label="Add a device" kinds={STATION_KINDS} placeholder="Add a wheel, drawer, guider, tilt plate…"
             hint={state.stations.length ? "Added devices go on the sensor side of the list." : "The devices that must be in the train, in order."}
             onPick={(p) => update({ stations: [...state.stations, p.slug] })} />
         ) : <p className="text-xs text-muted">{MAX_STATIONS} devices is the most one train takes here.</p>}
