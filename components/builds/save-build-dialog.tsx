@@ -88,7 +88,7 @@ export function SaveBuildButton({ request, solutionIndex, signedIn, defaultTitle
               </Field>
               <VisibilityChoice name="build-visibility" value={form.visibility} onChange={(visibility) => setForm({ ...form, visibility })} />
               <div className="flex flex-wrap items-center gap-2">
-                <Button type="submit" disabled={busy || !form.title.trim()}>{busy ? "Saving…" : "Save as link"}</Button>
+                <Button type="submit" disabled={busy || !form.title.trim()}>{busy ? "Saving…" : "Save build"}</Button>
                 <span className="text-xs text-muted">Saves alternative {solutionIndex + 1}. <Link href="/builds?mine=1" className="underline underline-offset-4">Your builds</Link></span>
               </div>
             </form>

@@ -23,7 +23,7 @@ function rows<T extends { cx: number; width: number }>(labels: T[]): (T & { row:
 }
 
 const shortName = (name: string, max = 22) => (name.length > max ? `${name.slice(0, max - 1)}…` : name);
-const textWidth = (s: string, px: number, mono = false) => [...s].reduce((w, ch) => w + (/[♂♀″]/.test(ch) ? 1 : mono ? 0.62 : 0.56), 0) * px;
+const textWidth = (s: string, px: number, mono = false) => [...s].reduce((w, ch) => w + (/[♂♀→]/.test(ch) ? 1 : mono ? 0.62 : 0.56), 0) * px;
 
 function Box({ p }: { p: Placed }) {
   const h = HEIGHT[p.role];
@@ -70,7 +70,8 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
   const sensorX = x0 + chain.sensorDistanceMm * scale;
 
   const joints = rows(train.joints.map((j, i) => {
-    const label = `${getInterface(j.code)?.kind === "thread" ? j.code : getInterface(j.code)?.name.replace("-inch barrel", "″ barrel") ?? j.code} ${genderSign(j.skyGender)}${genderSign(j.sensorGender)}`;
+    const spec = getInterface(j.code);
+    const label = `${spec?.kind === "thread" ? j.code : spec?.name ?? j.code} · ${genderSign(j.skyGender)}→${genderSign(j.sensorGender)}`;
     return { ...j, label, cx: placed[i + 1].x, width: textWidth(label, 11, true) };
   }));
   const names = rows(placed.map((p) => {
