@@ -6,6 +6,9 @@ import { SMTPServer } from "smtp-server";
 
 export async function startMailFake(opts: { port: number; databaseUrl: string }) {
   const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 2 });
+  // An idle connection dropped by the server (database dropped at the end of a test run,
+  // server restarted) must not take the whole process down; the next query reconnects.
+  pool.on("error", () => {});
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ["STARTTLS"],

@@ -1,6 +1,6 @@
 // npm test — unit tests first (no services), then a fresh database, the fakes, a production
 // build of the app, and the integration and browser tests against it.
-import { spawnSync } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -18,20 +18,22 @@ mkdirSync(reports, { recursive: true });
 type Totals = { passed: number; failed: number; skipped: number };
 const totals: Totals = { passed: 0, failed: 0, skipped: 0 };
 
-function vitest(projects: string[], env: NodeJS.ProcessEnv, extra: string[] = []): number {
+// Asynchronous on purpose: the mail and S3 fakes live in this process and must keep answering.
+async function vitest(projects: string[], env: NodeJS.ProcessEnv, extra: string[] = []): Promise<number> {
   const out = path.join(reports, `${projects.join("-")}.json`);
   const args = [path.join(root, "node_modules", "vitest", "vitest.mjs"), "run", ...projects.flatMap((p) => ["--project", p]),
     "--reporter=default", "--reporter=json", `--outputFile.json=${out}`, ...extra];
-  const r = spawnSync(process.execPath, args, { cwd: root, stdio: "inherit", env });
+  const child = spawn(process.execPath, args, { cwd: root, stdio: "inherit", env });
+  const code = await new Promise<number>((resolve) => child.on("exit", (c) => resolve(c ?? 1)));
   if (existsSync(out)) {
     const report = JSON.parse(readFileSync(out, "utf8")) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
     totals.passed += report.numPassedTests;
     totals.failed += report.numFailedTests;
     totals.skipped += report.numPendingTests + report.numTodoTests;
-  } else if (r.status !== 0) {
+  } else if (code !== 0) {
     totals.failed += 1;
   }
-  return r.status ?? 1;
+  return code;
 }
 
 const args = process.argv.slice(2);
@@ -39,7 +41,7 @@ console.log("[typecheck] tsc --noEmit");
 const tsc = spawnSync(process.execPath, [path.join(root, "node_modules", "typescript", "bin", "tsc"), "--noEmit", "-p", "tsconfig.json"], { cwd: root, stdio: "inherit" });
 if (tsc.status !== 0) totals.failed += 1;
 let status = tsc.status ?? 1;
-status = vitest(["unit"], process.env, args) || status;
+status = (await vitest(["unit"], process.env, args)) || status;
 
 if (!process.env.TRAINYARD_UNIT_ONLY) {
   const haveChromium = ensureChromium();
@@ -57,9 +59,9 @@ if (!process.env.TRAINYARD_UNIT_ONLY) {
     app.stderr?.on("data", (d) => { appLog += d; });
     const baseUrl = `http://127.0.0.1:${appPort}`;
     await waitForHealth(baseUrl);
-    const testEnv = { ...env, BASE_URL: baseUrl, TRAINYARD_E2E: haveChromium ? "1" : "0" };
+    const testEnv = { ...env, TRAINYARD_BASE_URL: baseUrl, TRAINYARD_E2E: haveChromium ? "1" : "0" };
     const projects = ["integration", ...(haveChromium ? ["e2e"] : [])];
-    const s = vitest(projects, testEnv, args);
+    const s = await vitest(projects, testEnv, args);
     if (s !== 0) {
       status = status || s;
       console.log("\n── app server log (last 4000 characters) ──\n" + appLog.slice(-4000));

@@ -1,5 +1,5 @@
 // Talking to the running app in integration tests: a tiny cookie-keeping client.
-export const BASE_URL = process.env.BASE_URL ?? "";
+export const BASE_URL = process.env.TRAINYARD_BASE_URL ?? "";
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "trainyard-demo";
 
 if (!BASE_URL) throw new Error("BASE_URL is not set: run integration tests through `npm test`.");

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
-import { Planner } from "@/components/planner/planner";
 import { getSessionUser } from "@/lib/auth/session";
 import { parsePlanParams, planStateToParams } from "@/lib/planner/url-state";
+import { PlanWorkbench } from "./plan-workbench";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Planner" };
@@ -26,7 +26,7 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
       <PageTitle title="Planner"
         lead="Choose the optics, the devices and the camera. Trainyard mates every joint and lands the sensor at the back focus — the link in your address bar reproduces this plan." />
       {/* Keyed by the plan, so following a link to another plan starts from that link. */}
-      <Planner key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
+      <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
     </>
   );
 }
