@@ -1,7 +1,8 @@
 // Starts Debian's PostgreSQL for this checkout: cluster in .data/postgres, 127.0.0.1 only,
 // run as the `postgres` user when we are root (the server refuses to run as root).
 import { execFileSync, spawnSync } from "node:child_process";
-import { chmodSync, chownSync, existsSync, mkdirSync, readdirSync, writeFileSync } from "node:fs";
+import { chmodSync, chownSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from "node:fs";
+import net from "node:net";
 import path from "node:path";
 import pg from "pg";
 
@@ -53,7 +54,22 @@ function chownTree(target: string, uid: number, gid: number) {
  * Start (or reuse) the project's cluster. Idempotent: when the server in `dataDir` already
  * runs, it is reused and `stop` leaves it alone.
  */
-export async function startPostgres(opts: { root: string; port: number; log?: (m: string) => void }): Promise<PgServer> {
+function portIsFree(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const srv = net.createServer();
+    srv.once("error", () => resolve(false));
+    srv.listen(port, "127.0.0.1", () => srv.close(() => resolve(true)));
+  });
+}
+
+async function pickPort(preferred: number | undefined): Promise<number> {
+  if (preferred !== undefined) return preferred;
+  for (let port = 54329; port < 54429; port++) if (await portIsFree(port)) return port;
+  throw new Error("No free port for PostgreSQL between 54329 and 54428: set PGPORT.");
+}
+
+/** `port` undefined: 54329, or the next free one when another cluster already holds it. */
+export async function startPostgres(opts: { root: string; port?: number; log?: (m: string) => void }): Promise<PgServer> {
   const log = opts.log ?? ((m) => console.log(`[postgres] ${m}`));
   const bin = ensureBinaries(log);
   const dataRoot = path.join(opts.root, ".data");
@@ -63,12 +79,13 @@ export async function startPostgres(opts: { root: string; port: number; log?: (m
   if (isRoot()) {
     uid = Number(execFileSync("id", ["-u", "postgres"], { encoding: "utf8" }).trim());
     gid = Number(execFileSync("id", ["-g", "postgres"], { encoding: "utf8" }).trim());
-    // The postgres user must be able to reach the data folder through the checkout.
-    let dir = dataRoot;
-    while (dir !== path.dirname(dir)) {
-      try { chmodSync(dir, 0o755); } catch { /* best effort for parents we cannot change */ }
-      dir = path.dirname(dir);
-      if (dir === "/") break;
+    // The postgres user must be able to pass through the folders above the cluster (a
+    // checkout under a private temporary folder, say): add only the traverse bit.
+    for (let dir = dataRoot; dir !== path.dirname(dir); dir = path.dirname(dir)) {
+      try {
+        const mode = statSync(dir).mode & 0o7777;
+        if ((mode & 0o001) === 0) chmodSync(dir, mode | 0o001);
+      } catch { /* best effort for parents we cannot change */ }
     }
   }
   if (!existsSync(path.join(dataDir, "PG_VERSION"))) {
@@ -81,21 +98,26 @@ export async function startPostgres(opts: { root: string; port: number; log?: (m
   }
   const status = runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "status"], { quiet: true });
   let started = false;
-  if (!status.ok) {
+  let port: number;
+  if (status.ok) {
+    // Already running for this checkout: its port is line 4 of postmaster.pid.
+    port = Number(readFileSync(path.join(dataDir, "postmaster.pid"), "utf8").split("\n")[3]);
+    if (opts.port !== undefined && port !== opts.port) log(`the cluster already runs on port ${port}; using that instead of ${opts.port}`);
+    log(`reusing the running cluster on 127.0.0.1:${port}`);
+  } else {
+    port = await pickPort(opts.port);
     const logFile = path.join(dataRoot, "postgres.log");
     writeFileSync(logFile, "", { flag: "a" });
     if (isRoot()) chownSync(logFile, uid, gid);
-    const o = `-c listen_addresses=127.0.0.1 -p ${opts.port} -k ${dataDir} -c fsync=off -c synchronous_commit=off -c max_connections=200`;
+    const o = `-c listen_addresses=127.0.0.1 -p ${port} -k ${dataDir} -c fsync=off -c synchronous_commit=off -c max_connections=200`;
     const r = runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-l", logFile, "-o", o, "-w", "-t", "60", "start"]);
     if (!r.ok) throw new Error(`PostgreSQL did not start (see ${logFile}):\n${r.out}`);
     started = true;
-    log(`listening on 127.0.0.1:${opts.port}`);
-  } else {
-    log("reusing the running cluster");
+    log(`listening on 127.0.0.1:${port}`);
   }
-  const url = (database: string) => `postgres://postgres@127.0.0.1:${opts.port}/${database}`;
+  const url = (database: string) => `postgres://postgres@127.0.0.1:${port}/${database}`;
   return {
-    url, port: opts.port, started,
+    url, port, started,
     stop: () => {
       if (!started) return;
       runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-m", "fast", "-w", "stop"], { quiet: true });

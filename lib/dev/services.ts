@@ -40,7 +40,7 @@ export async function startServices(opts: {
   let databaseUrl = process.env.DATABASE_URL ?? "";
   try {
     if (!databaseUrl) {
-      const pgPort = Number(process.env.PGPORT ?? 54329);
+      const pgPort = process.env.PGPORT ? Number(process.env.PGPORT) : undefined;
       const server = await startPostgres({ root: opts.root, port: pgPort, log: (m) => log(`[postgres] ${m}`) });
       stops.push(server.stop);
       await ensureDatabase(server.url("postgres"), opts.database, { fresh: opts.fresh });
