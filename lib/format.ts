@@ -17,8 +17,12 @@ export function formatLengthIn(unit: "mm" | "in", mm: number | null | undefined)
   return unit === "in" ? formatInches(mm) : formatMm(mm);
 }
 
+/** Catalog list prices are kept in one currency (cents); set NEXT_PUBLIC_CURRENCY to change it. */
+export const CURRENCY = process.env.NEXT_PUBLIC_CURRENCY ?? "USD";
+const money = new Intl.NumberFormat("en-US", { style: "currency", currency: CURRENCY });
+
 export function formatPrice(cents: number | null | undefined): string {
-  return cents === null || cents === undefined ? "—" : `${(cents / 100).toFixed(2)}`;
+  return cents === null || cents === undefined ? "—" : money.format(cents / 100);
 }
 
 export function formatGrams(g: number | null | undefined): string {

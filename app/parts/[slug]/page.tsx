@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getPartOrThrow } from "@/db/queries/parts";
-import { FaceGlyph } from "@/components/parts/face-glyph";
+import { PartProfile } from "@/components/parts/part-profile";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { SafetyNote } from "@/components/safety-note";
 import { ButtonLink } from "@/components/ui/button";
@@ -9,11 +9,12 @@ import { getSessionUser, isModerator } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { KIND_LABELS, formatGrams, formatMm, formatPrice } from "@/lib/format";
+import { getInterface } from "@/lib/interfaces";
 
 export const dynamic = "force-dynamic";
 
-function planHref(kind: string, slug: string, role?: string) {
-  if (kind === "optics") return role === "corrector" ? `/plan?corrector=${slug}` : `/plan?optics=${slug}`;
+function planHref(kind: string, slug: string) {
+  if (kind === "optics") return `/plan?optics=${slug}`;
   if (kind === "camera") return `/plan?camera=${slug}`;
   if (["filter-wheel", "filter-drawer", "oag", "tilt-plate"].includes(kind)) return `/plan?stations=${slug}`;
   return `/plan`;
@@ -64,22 +65,23 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
           <h1 className="text-3xl font-semibold tracking-tight text-ink">{p.model}</h1>
           <p className="mt-1 text-muted">{KIND_LABELS[p.kind]}{s.opticsRole ? ` · ${s.opticsRole}` : ""}{row.status !== "approved" ? ` · ${row.status}` : ""}</p>
         </div>
-        <ButtonLink href={planHref(p.kind, p.slug, s.opticsRole)}>Plan with this</ButtonLink>
+        <ButtonLink href={planHref(p.kind, p.slug)}>Plan with this</ButtonLink>
       </header>
       {p.description ? <p className="max-w-3xl text-text">{p.description}</p> : null}
-      <section aria-label="Faces" className="grid gap-4 rounded-lg border border-line bg-surface p-5 sm:grid-cols-2">
-        {(["front", "rear"] as const).map((side) => {
-          const port = p[side];
-          return (
-            <div key={side} className="flex items-center gap-4">
-              {port ? <FaceGlyph code={port.interface} gender={port.gender} side={side} /> : <div className="h-14 w-10 rounded border border-dashed border-line" />}
-              <div>
+      <section aria-label="Faces" className="grid items-center gap-6 rounded-lg border border-line bg-surface p-5 md:grid-cols-[1.4fr_1fr]">
+        <PartProfile front={p.front} rear={p.rear} lengthMm={p.lengthMm} name={p.name} />
+        <div className="space-y-3 text-sm">
+          {(["front", "rear"] as const).map((side) => {
+            const port = p[side];
+            return (
+              <div key={side}>
                 <div className="text-xs uppercase tracking-wide text-muted">{side === "front" ? "Sky side (front)" : "Sensor side (rear)"}</div>
-                {port ? <InterfaceChip code={port.interface} gender={port.gender} /> : <span className="text-muted">{side === "front" ? "Nothing in front (the sky)" : "Nothing behind (the sensor)"}</span>}
+                {port ? <InterfaceChip code={port.interface} gender={port.gender} /> : <span className="text-muted">{side === "front" ? "Open to the sky" : "Ends at the sensor"}</span>}
+                {port ? <p className="text-xs text-muted">Mates with a {port.gender === "male" ? "female" : "male"} {getInterface(port.interface)?.name ?? port.interface}{getInterface(port.interface)?.note ? `. ${getInterface(port.interface)!.note}` : ""}</p> : null}
               </div>
-            </div>
-          );
-        })}
+            );
+          })}
+        </div>
       </section>
       <section aria-label="Numbers" className="rounded-lg border border-line bg-surface">
         <dl className="grid sm:grid-cols-2">
