@@ -7,7 +7,8 @@ import type { Gender, Port } from "./types";
 export const opposite = (g: Gender): Gender => (g === "male" ? "female" : "male");
 
 export class FaceTable {
-  readonly ids = new Map<string, number>();
+  /** interface → [male id, female id] (-1 when not interned yet). */
+  private readonly ids = new Map<string, [number, number]>();
   readonly iface: string[] = [];
   readonly gender: Gender[] = [];
 
@@ -16,19 +17,19 @@ export class FaceTable {
   }
 
   intern(iface: string, gender: Gender): number {
-    const key = `${iface}\u0000${gender}`;
-    let id = this.ids.get(key);
-    if (id === undefined) {
-      id = this.iface.length;
-      this.ids.set(key, id);
+    let pair = this.ids.get(iface);
+    if (!pair) this.ids.set(iface, (pair = [-1, -1]));
+    const slot = gender === "male" ? 0 : 1;
+    if (pair[slot] < 0) {
+      pair[slot] = this.iface.length;
       this.iface.push(iface);
       this.gender.push(gender);
     }
-    return id;
+    return pair[slot];
   }
 
   lookup(iface: string, gender: Gender): number {
-    return this.ids.get(`${iface}\u0000${gender}`) ?? -1;
+    return this.ids.get(iface)?.[gender === "male" ? 0 : 1] ?? -1;
   }
 
   /** The face a chain must present for this front port to mate. */
@@ -43,7 +44,7 @@ export class FaceTable {
   /** A copy that can grow with a request's own faces without touching the cached model. */
   extend(): FaceTable {
     const copy = new FaceTable();
-    for (const [k, v] of this.ids) copy.ids.set(k, v);
+    for (const [k, v] of this.ids) copy.ids.set(k, [v[0], v[1]]);
     copy.iface.push(...this.iface);
     copy.gender.push(...this.gender);
     return copy;

@@ -45,17 +45,17 @@ const GRAINS = [1, 0.5, 0.25, 0.2, 0.1, 0.05, 0.02, 0.01];
 
 export function isMultiple(value: number, step: number): boolean {
   const q = value / step;
-  return Math.abs(q - Math.round(q)) < 1e-6;
+  return Math.abs(q - Math.round(q)) < 1e-9;
 }
 
-export function grainOf(values: Iterable<number>, candidates: readonly number[] = GRAINS): number | null {
-  let alive = candidates.slice();
-  for (const v of values) {
-    if (v === 0) continue;
-    alive = alive.filter((g) => isMultiple(v, g));
-    if (alive.length === 0) return null;
+/** The largest candidate step that every value is a multiple of, or null. */
+export function grainOf(values: ArrayLike<number>, candidates: readonly number[] = GRAINS): number | null {
+  let from = 0; // candidates are tried largest first; a failed one never comes back
+  for (let i = 0; i < values.length && from < candidates.length; i++) {
+    const v = values[i];
+    while (from < candidates.length && !isMultiple(v, candidates[from])) from++;
   }
-  return alive[0] ?? null;
+  return from < candidates.length ? candidates[from] : null;
 }
 
 function usableConnector(p: Part): boolean {
@@ -66,36 +66,37 @@ export function buildModel(parts: readonly Part[]): Model {
   const t0 = performance.now();
   const faces = new FaceTable();
   const quantity = new Float64Array(parts.length);
-  const rawPart: number[] = [];
-  const rawRev: number[] = [];
-  const rawFrom: number[] = [];
-  const rawTo: number[] = [];
+  const cap = parts.length * 2;
+  const rPart = new Int32Array(cap), rRev = new Uint8Array(cap), rFrom = new Int32Array(cap), rTo = new Int32Array(cap);
+  const rLen = new Float64Array(cap), rAdj = new Float64Array(cap), rPrice = new Float64Array(cap);
+  let n = 0;
   for (let i = 0; i < parts.length; i++) {
     const p = parts[i];
     quantity[i] = p.quantity === undefined ? Infinity : Math.floor(p.quantity);
     if (!usableConnector(p)) continue;
-    const front = p.front!;
-    const rear = p.rear!;
-    rawPart.push(i); rawRev.push(0); rawFrom.push(faces.entryOf(front)); rawTo.push(faces.exitOf(rear));
+    const front = p.front!, rear = p.rear!;
+    const len = p.lengthMm, adj = Math.max(0, p.adjustMm ?? 0), price = p.priceCents ?? Infinity;
+    rPart[n] = i; rRev[n] = 0; rFrom[n] = faces.entryOf(front); rTo[n] = faces.exitOf(rear);
+    rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
     const symmetric = front.interface === rear.interface && front.gender === rear.gender;
     if (p.reversible && !symmetric) {
-      rawPart.push(i); rawRev.push(1); rawFrom.push(faces.entryOf(rear)); rawTo.push(faces.exitOf(front));
+      rPart[n] = i; rRev[n] = 1; rFrom[n] = faces.entryOf(rear); rTo[n] = faces.exitOf(front);
+      rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
     }
   }
-  const n = rawPart.length;
-  const price = (i: number) => parts[rawPart[i]].priceCents ?? Infinity;
-  const order = Array.from({ length: n }, (_, i) => i);
+  const order = new Uint32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
   order.sort((a, b) =>
-    rawFrom[a] - rawFrom[b] || rawTo[a] - rawTo[b] || parts[rawPart[a]].lengthMm - parts[rawPart[b]].lengthMm ||
-    cmpPrice(price(a), price(b)) || rawPart[a] - rawPart[b] || rawRev[a] - rawRev[b]);
+    rFrom[a] - rFrom[b] || rTo[a] - rTo[b] || rLen[a] - rLen[b] || cmpPrice(rPrice[a], rPrice[b]) ||
+    rPart[a] - rPart[b] || rRev[a] - rRev[b]);
 
   const oPart = new Int32Array(n), oRev = new Uint8Array(n), oFrom = new Int32Array(n), oTo = new Int32Array(n);
   const oLen = new Float64Array(n), oAdj = new Float64Array(n), oPrice = new Float64Array(n);
-  order.forEach((src, k) => {
-    const p = parts[rawPart[src]];
-    oPart[k] = rawPart[src]; oRev[k] = rawRev[src]; oFrom[k] = rawFrom[src]; oTo[k] = rawTo[src];
-    oLen[k] = p.lengthMm; oAdj[k] = Math.max(0, p.adjustMm ?? 0); oPrice[k] = price(src);
-  });
+  for (let k = 0; k < n; k++) {
+    const src = order[k];
+    oPart[k] = rPart[src]; oRev[k] = rRev[src]; oFrom[k] = rFrom[src]; oTo[k] = rTo[src];
+    oLen[k] = rLen[src]; oAdj[k] = rAdj[src]; oPrice[k] = rPrice[src];
+  }
 
   const groups: number[] = [];
   for (let k = 0; k < n; k++) if (k === 0 || oFrom[k] !== oFrom[k - 1] || oTo[k] !== oTo[k - 1]) groups.push(k);
@@ -107,7 +108,9 @@ export function buildModel(parts: readonly Part[]): Model {
     gFrom[g] = oFrom[s]; gTo[g] = oTo[s]; gStart[g] = s; gEnd[g] = e; gMinLen[g] = oLen[s];
     let maxLA = 0, maxA = 0, minP = Infinity;
     for (let k = s; k < e; k++) {
-      maxLA = Math.max(maxLA, oLen[k] + oAdj[k]); maxA = Math.max(maxA, oAdj[k]); minP = Math.min(minP, oPrice[k]);
+      if (oLen[k] + oAdj[k] > maxLA) maxLA = oLen[k] + oAdj[k];
+      if (oAdj[k] > maxA) maxA = oAdj[k];
+      if (oPrice[k] < minP) minP = oPrice[k];
     }
     gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP;
   }
@@ -116,16 +119,18 @@ export function buildModel(parts: readonly Part[]): Model {
   const faceOut = new Int32Array(F + 1).fill(G);
   for (let g = G - 1; g >= 0; g--) faceOut[gFrom[g]] = g;
   for (let f = F - 1; f >= 0; f--) if (faceOut[f] > faceOut[f + 1]) faceOut[f] = faceOut[f + 1];
-  const inGroups = Int32Array.from({ length: G }, (_, g) => g).sort((a, b) => gTo[a] - gTo[b] || a - b);
+  const inGroups = new Int32Array(G);
+  for (let g = 0; g < G; g++) inGroups[g] = g;
+  inGroups.sort((a, b) => gTo[a] - gTo[b] || a - b);
   const faceIn = new Int32Array(F + 1).fill(G);
   for (let i = G - 1; i >= 0; i--) faceIn[gTo[inGroups[i]]] = i;
   for (let f = F - 1; f >= 0; f--) if (faceIn[f] > faceIn[f + 1]) faceIn[f] = faceIn[f + 1];
 
-  const lengths = function* () { for (let k = 0; k < n; k++) { yield oLen[k]; yield oAdj[k]; } };
+  const g1 = grainOf(oLen), g2 = grainOf(oAdj);
+  const grainMm = g1 === null || g2 === null ? null : grainOf([g1, g2]);
   const model: Omit<Model, "graph" | "buildMs"> = {
     parts, faces, quantity, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
-    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn,
-    grainMm: grainOf(lengths()),
+    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn, grainMm,
   };
   const graph = buildFaceGraph(model);
   return { ...model, graph, buildMs: performance.now() - t0 };

@@ -25,6 +25,7 @@ function nearestBelow(p: Problem, t: Tables, grain: number | null): number | nul
 
 function nearestAbove(p: Problem, t: Tables, grain: number | null): number | null {
   const li = p.loc[0][p.start];
+  t.ensure(t.R);
   let ceiling = -Infinity;
   for (let r = 0; r <= t.R; r++) ceiling = Math.max(ceiling, t.maxLen[0][li * (t.R + 1) + r]);
   if (!(ceiling > p.hi)) return null;

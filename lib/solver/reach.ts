@@ -9,9 +9,9 @@
 // [w·(B − n − 1), w·(B + 2n + 2)) so that float rounding of a bucket can never cut it.
 
 import { type Bits, firstSetIn, isEmpty, lastSetIn, orShift, orShiftRange, popcount, forEachBit, setRange } from "./bitset";
+import { isMultiple } from "./model";
 import type { Problem } from "./problem";
 
-const EPS = 1e-7;
 const MAX_GRID_BITS = 8192;
 const COARSE_BITS = 2048;
 
@@ -26,6 +26,12 @@ export class Reach {
   private readonly groupBits = new Map<number, Bits>();
   private readonly tmp: Bits;
   private built = -1;
+  /** Highest level (parts left) with bitsets; beyond it queries answer "maybe". */
+  get level(): number {
+    return this.built;
+  }
+  /** Padding on every query: grid sums are exact to float noise, coarse ones are padded anyway. */
+  private readonly eps: number;
 
   constructor(private readonly p: Problem, readonly capMm: number, grain: number | null) {
     this.grid = grain !== null && (2 * capMm) / grain <= MAX_GRID_BITS;
@@ -33,6 +39,7 @@ export class Reach {
     this.nb = this.grid ? 2 * Math.ceil(capMm / grain! + 1e-9) + 2 : Math.floor(capMm / this.step) + 2;
     this.words = (this.nb + 31) >>> 5;
     this.tmp = new Uint32Array(this.words);
+    this.eps = this.grid ? 1e-8 : 1e-7;
     for (let leg = 0; leg <= p.S; leg++) { this.bits.push([]); this.pops.push([]); }
   }
 
@@ -77,6 +84,7 @@ export class Reach {
   /** Make sure bitsets exist for every r up to `r`. */
   ensure(r: number): void {
     const { p } = this;
+    r = Math.min(r, this.p.maxParts);
     const m = p.model, modelF = m.faces.size;
     for (let k = this.built + 1; k <= r; k++) {
       for (let leg = p.S; leg >= 0; leg--) {
@@ -123,7 +131,7 @@ export class Reach {
   /** Bit range whose buckets can hold a length in [qlo, qhi], for n items still to add. */
   private span(qlo: number, qhi: number, n: number): [number, number] {
     if (this.grid) {
-      const u = (qlo - EPS) / this.step, v = (qhi + EPS) / this.step;
+      const u = (qlo - this.eps) / this.step, v = (qhi + this.eps) / this.step;
       const a = Math.floor(u), b = Math.floor(v);
       return [u - a <= 1e-9 ? 2 * a : 2 * a + 1, v - b <= 1e-9 ? 2 * b : 2 * b + 1];
     }
@@ -151,14 +159,16 @@ export class Reach {
 
   /** Can the rest add a length in [qlo, qhi]? */
   any(leg: number, li: number, r: number, qlo: number, qhi: number): boolean {
+    if (r > this.built) return true;
     const bits = this.bits[leg][r]?.[li];
-    if (!bits || qhi < qlo - EPS) return false;
+    if (!bits || qhi < qlo - this.eps) return false;
     const [a, b] = this.span(qlo, qhi, this.items(leg, r));
     return firstSetIn(bits, a, Math.min(b, this.nb - 1)) >= 0;
   }
 
   /** Least distance from anything the rest can add to [qlo, qhi] (a lower bound). */
   distance(leg: number, li: number, r: number, qlo: number, qhi: number): number {
+    if (r > this.built) return 0;
     const bits = this.bits[leg][r]?.[li];
     if (!bits) return Infinity;
     const n = this.items(leg, r);
@@ -169,7 +179,7 @@ export class Reach {
     if (below >= 0) best = Math.min(best, qlo - this.supOf(below, n));
     const above = firstSetIn(bits, b + 1, this.nb - 1);
     if (above >= 0) best = Math.min(best, this.infOf(above, n) - qhi);
-    return Math.max(0, best - 2 * EPS);
+    return Math.max(0, best - 2 * this.eps);
   }
 }
 
@@ -181,11 +191,7 @@ export function requestGrain(p: Problem): number | null {
   for (const list of p.mounts) for (const mt of list) extra.push(mt.len, mt.adj);
   const candidates = [1, 0.5, 0.25, 0.2, 0.1, 0.05, 0.02, 0.01].filter((c) => c <= g!);
   for (const c of candidates) {
-    if (extra.every((v) => Math.abs(v / c - Math.round(v / c)) < 1e-6) && isMul(g, c)) return c;
+    if (extra.every((v) => isMultiple(v, c)) && isMultiple(g, c)) return c;
   }
   return null;
-}
-
-function isMul(a: number, b: number): boolean {
-  return Math.abs(a / b - Math.round(a / b)) < 1e-6;
 }

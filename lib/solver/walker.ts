@@ -22,6 +22,12 @@ export type Searcher = {
 };
 
 const SLACK = 1e-9;
+/**
+ * States a walk may visit before it stops to sharpen the bitset bound (doubles each time).
+ * Tests set it to 0 to force the bitsets on every level.
+ */
+export const tuning = { walkBudget: 4000 };
+const ABORT = Symbol("sharpen the bound and walk again");
 
 function lowerBound(arr: Float64Array, from: number, to: number, x: number): number {
   let lo = from, hi = to;
@@ -38,6 +44,8 @@ export class Walker {
   private readonly visit: Int32Array;
   private readonly moves: number[] = [];
   private k = 0;
+  private spent = 0;
+  private budget = Infinity;
   nodes = 0;
 
   constructor(private readonly p: Problem, private readonly t: Tables, private readonly reach: Reach | null, private readonly s: Searcher) {
@@ -45,15 +53,35 @@ export class Walker {
     this.visit = new Int32Array(p.faces.size);
   }
 
-  /** Walk every canonical chain with exactly k connecting parts. */
+  /**
+   * Walk every canonical chain with exactly k connecting parts. The bitset relaxation is
+   * built one level at a time, only when the walk proves expensive: on easy catalogs the
+   * scalar bounds alone keep it to a few hundred states, and the bitsets would cost more
+   * than they save. An interrupted walk is simply redone with the sharper bound; whatever
+   * it had already reported was a real chain and stays valid.
+   */
   run(k: number): void {
     const { p } = this;
     if (p.start < 0 || p.loc[0][p.start] < 0) return;
     this.k = k;
-    this.reach?.ensure(k);
-    this.visit.fill(0);
-    this.visit[p.start] = 1;
-    this.node(0, p.start, 0, 0, 0, 0, -1);
+    this.t.ensure(k);
+    let budget = tuning.walkBudget;
+    for (;;) {
+      const reach = this.reach;
+      this.budget = reach && reach.level < k ? this.spent + budget : Infinity;
+      this.used.fill(0);
+      this.visit.fill(0);
+      this.moves.length = 0;
+      this.visit[p.start] = 1;
+      try {
+        this.node(0, p.start, 0, 0, 0, 0, -1);
+        return;
+      } catch (e) {
+        if (e !== ABORT) throw e;
+        reach!.ensure(reach!.level + 1);
+        budget = Math.max(1, budget * 2);
+      }
+    }
   }
 
   private node(leg: number, f: number, cmin: number, cadj: number, price: number, u: number, loopMin: number): void {
@@ -61,6 +89,7 @@ export class Walker {
     const li = p.loc[leg][f];
     if (li < 0) return;
     this.nodes++;
+    if (++this.spent > this.budget) throw ABORT;
     const r = this.k - u;
     const W = t.R + 1;
     const ti = li * W + r;

@@ -1,0 +1,213 @@
+// An independent, deliberately naive reading of SOLVER.md: enumerate every chain (every
+// order, every orientation, every leg) within maxParts and stock, then apply the contract's
+// rules to the whole list. Exponential; meant for catalogs of a handful of parts.
+import type { Part, Port, SolveRequest } from "@/lib/solver";
+
+export type OracleChain = {
+  items: { part: Part; role: "connector" | "station" | "camera"; reversed: boolean }[];
+  dMin: number;
+  dMax: number;
+  partCount: number;
+  price: number | null;
+  multiset: string;
+};
+
+export type OracleSolution = { multiset: string; k: number; err: number | null; price: number | null; d: number };
+
+export type Oracle = {
+  status: "ok" | "no-connection" | "too-long" | "out-of-reach";
+  target: number | null;
+  tol: number | null;
+  filterShift: number;
+  chains: OracleChain[];
+  shortestD: number | null;
+  /** Every distinct multiset in the window (or every one without a target), best first. */
+  ranked: OracleSolution[];
+  nearest: { belowMm: number | null; aboveMm: number | null } | null;
+};
+
+const SLACK = 1e-6;
+
+const mates = (open: Port, front: Port | null) =>
+  !!front && open.interface === front.interface && open.gender !== front.gender;
+
+function orientations(p: Part): { front: Port | null; rear: Port | null; reversed: boolean }[] {
+  const out = [{ front: p.front, rear: p.rear, reversed: false }];
+  const same = p.front && p.rear && p.front.interface === p.rear.interface && p.front.gender === p.rear.gender;
+  if (p.reversible && !same) out.push({ front: p.rear, rear: p.front, reversed: true });
+  return out;
+}
+
+export function multisetOf(ids: string[]): string {
+  return [...ids].sort().join("|");
+}
+
+export function enumerateChains(req: SolveRequest): OracleChain[] {
+  const maxParts = req.maxParts ?? 10;
+  const stations = req.stations ?? [];
+  const out: OracleChain[] = [];
+  const used = new Map<number, number>();
+  const path: OracleChain["items"] = [];
+
+  const finish = () => {
+    const items = [...path, { part: req.camera, role: "camera" as const, reversed: false }];
+    let dMin = 0, dMax = 0, price: number | null = 0, partCount = 0;
+    const ids: string[] = [];
+    for (const it of items) {
+      dMin += it.part.lengthMm;
+      dMax += it.part.lengthMm + (it.part.adjustMm ?? 0);
+      if (it.role === "connector") {
+        partCount++;
+        ids.push(it.part.id);
+        price = price === null || it.part.priceCents === undefined ? null : price + it.part.priceCents;
+      }
+    }
+    out.push({ items, dMin, dMax, partCount, price, multiset: multisetOf(ids) });
+  };
+
+  const step = (open: Port | null, leg: number, count: number) => {
+    if (!open) return;
+    if (leg === stations.length && mates(open, req.camera.front)) finish();
+    if (leg < stations.length) {
+      for (const o of orientations(stations[leg])) {
+        if (!o.rear || !mates(open, o.front)) continue;
+        path.push({ part: stations[leg], role: "station", reversed: o.reversed });
+        step(o.rear, leg + 1, count);
+        path.pop();
+      }
+    }
+    if (count >= maxParts) return;
+    req.parts.forEach((part, i) => {
+      const q = part.quantity ?? Infinity;
+      if ((used.get(i) ?? 0) >= q) return;
+      for (const o of orientations(part)) {
+        if (!o.rear || !mates(open, o.front)) continue;
+        used.set(i, (used.get(i) ?? 0) + 1);
+        path.push({ part, role: "connector", reversed: o.reversed });
+        step(o.rear, leg, count + 1);
+        path.pop();
+        used.set(i, used.get(i)! - 1);
+      }
+    });
+  };
+  step(req.optics.rear, 0, 0);
+  return out;
+}
+
+const priceKey = (p: number | null) => (p === null ? Infinity : p);
+
+export function compareSolutions(a: OracleSolution, b: OracleSolution, eps = 1e-9): number {
+  if (a.k !== b.k) return a.k - b.k;
+  const ea = a.err === null ? 0 : Math.abs(a.err), eb = b.err === null ? 0 : Math.abs(b.err);
+  if (Math.abs(ea - eb) > eps) return ea - eb;
+  if (priceKey(a.price) !== priceKey(b.price)) return priceKey(a.price) < priceKey(b.price) ? -1 : 1;
+  if (Math.abs(a.d - b.d) > eps) return a.d - b.d;
+  return 0;
+}
+
+export function bruteForce(req: SolveRequest): Oracle {
+  const filterShift = (req.filters ?? []).reduce((s, f) => {
+    const n = f.refractiveIndex ?? 1.5;
+    return s + (f.thicknessMm * (n - 1)) / n;
+  }, 0);
+  const bf = req.optics.backFocusMm;
+  const target = bf === undefined ? null : bf + filterShift;
+  const tol = target === null ? null : (req.optics.backFocusToleranceMm ?? 0.5);
+  const chains = enumerateChains(req);
+  const base = { target, tol, filterShift, chains };
+  if (chains.length === 0) return { ...base, status: "no-connection", shortestD: null, ranked: [], nearest: null };
+  const shortestD = Math.min(...chains.map((c) => c.dMin));
+
+  const best = new Map<string, OracleSolution>();
+  for (const c of chains) {
+    let d = c.dMin, err: number | null = null;
+    if (target !== null) {
+      d = Math.min(Math.max(target, c.dMin), c.dMax);
+      err = d - target;
+      if (Math.abs(err) > tol! + SLACK) continue;
+    }
+    const s: OracleSolution = { multiset: c.multiset, k: c.partCount, err, price: c.price, d };
+    const prev = best.get(c.multiset);
+    if (!prev || compareSolutions(s, prev) < 0) best.set(c.multiset, s);
+  }
+  const ranked = [...best.values()].sort(compareSolutions);
+
+  if (target === null) return { ...base, status: "ok", shortestD, ranked, nearest: null };
+  const lo = target - tol! - SLACK, hi = target + tol! + SLACK;
+  if (shortestD > hi) return { ...base, status: "too-long", shortestD, ranked, nearest: null };
+  if (ranked.length > 0) return { ...base, status: "ok", shortestD, ranked, nearest: null };
+  const below = chains.filter((c) => c.dMax < lo).map((c) => c.dMax);
+  const above = chains.filter((c) => c.dMin > hi).map((c) => c.dMin);
+  return {
+    ...base, status: "out-of-reach", shortestD, ranked,
+    nearest: { belowMm: below.length ? Math.max(...below) : null, aboveMm: above.length ? Math.min(...above) : null },
+  };
+}
+
+/**
+ * Everything a returned chain must satisfy on its own, checked from the request alone.
+ * Returns the problems found (empty when the chain is sound).
+ */
+export function chainProblems(req: SolveRequest, chain: import("@/lib/solver").Chain, target: number | null, setting: "target" | "min"): string[] {
+  const problems: string[] = [];
+  const stations = req.stations ?? [];
+  const byId = new Map(req.parts.map((p) => [p.id, p]));
+  let open: Port | null = req.optics.rear;
+  let at = 0, stationIndex = 0, partCount = 0, price: number | null = 0;
+  const uses = new Map<string, number>();
+  let dMin = 0, dMax = 0;
+  chain.steps.forEach((s, i) => {
+    const last = i === chain.steps.length - 1;
+    let part: Part | undefined;
+    if (s.role === "camera") {
+      part = req.camera;
+      if (!last) problems.push(`camera at step ${i} is not last`);
+    } else if (s.role === "station") {
+      part = stations[stationIndex];
+      if (!part || part.id !== s.partId) problems.push(`station ${s.partId} out of order at step ${i}`);
+      stationIndex++;
+    } else {
+      part = byId.get(s.partId);
+      partCount++;
+      uses.set(s.partId, (uses.get(s.partId) ?? 0) + 1);
+      price = price === null || part?.priceCents === undefined ? null : price + part.priceCents;
+    }
+    if (!part) { problems.push(`unknown part ${s.partId}`); return; }
+    if (s.reversed && s.role !== "station" && s.role !== "connector") problems.push(`step ${i} reversed`);
+    if (s.reversed && !part.reversible) problems.push(`${part.id} reversed but not reversible`);
+    const front = s.reversed ? part.rear : part.front;
+    const rear = s.reversed ? part.front : part.rear;
+    if (!open || !front || open.interface !== front.interface || open.gender === front.gender) {
+      problems.push(`joint ${i} does not mate (${JSON.stringify(open)} → ${JSON.stringify(front)})`);
+    }
+    if (front && s.joint.interface !== front.interface) problems.push(`joint ${i} labelled ${s.joint.interface}`);
+    open = rear;
+    const adj = part.adjustMm ?? 0;
+    if (s.lengthMm < part.lengthMm - 1e-9 || s.lengthMm > part.lengthMm + adj + 1e-9) problems.push(`step ${i} length ${s.lengthMm} outside its range`);
+    if (setting === "min" && Math.abs(s.lengthMm - part.lengthMm) > 1e-9) problems.push(`step ${i} not at its minimum`);
+    if (Math.abs(s.startMm - at) > 1e-9) problems.push(`step ${i} starts at ${s.startMm}, expected ${at}`);
+    at += s.lengthMm;
+    dMin += part.lengthMm;
+    dMax += part.lengthMm + adj;
+  });
+  if (chain.steps.at(-1)?.role !== "camera") problems.push("no camera at the end");
+  if (stationIndex !== stations.length) problems.push(`${stationIndex} of ${stations.length} stations`);
+  if (Math.abs(chain.sensorDistanceMm - at) > 1e-9) problems.push(`D ${chain.sensorDistanceMm} ≠ Σ ${at}`);
+  if (chain.partCount !== partCount) problems.push(`partCount ${chain.partCount} ≠ ${partCount}`);
+  if (partCount > (req.maxParts ?? 10)) problems.push(`more than maxParts`);
+  if (chain.priceCents !== price) problems.push(`price ${chain.priceCents} ≠ ${price}`);
+  for (const [id, n] of uses) {
+    const q = byId.get(id)?.quantity;
+    if (q !== undefined && n > q) problems.push(`${id} used ${n} times, ${q} in stock`);
+  }
+  if (target === null) {
+    if (chain.errorMm !== null) problems.push("errorMm should be null");
+  } else {
+    if (chain.errorMm === null || Math.abs(chain.errorMm - (at - target)) > 1e-9) problems.push(`errorMm ${chain.errorMm} ≠ D − T`);
+    if (setting === "target") {
+      const want = Math.min(Math.max(target, dMin), dMax);
+      if (Math.abs(at - want) > 1e-6) problems.push(`D ${at} is not the setting nearest the target (${want})`);
+    }
+  }
+  return problems;
+}
