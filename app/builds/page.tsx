@@ -13,6 +13,9 @@ import { listBuildsQuerySchema } from "@/lib/validation/builds";
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Builds", description: "Saved imaging trains that reach focus; reference builds are checked by moderators." };
 
+// Drawn by us, so night mode has no white box.
+const CHECKBOX = "grid h-4 w-4 shrink-0 appearance-none place-content-center rounded-[3px] border border-muted bg-surface before:h-2 before:w-2 before:scale-0 before:rounded-[1px] before:bg-bg before:content-[''] checked:border-ink checked:bg-ink checked:before:scale-100 night:checked:border-brass night:checked:bg-brass night:before:bg-black";
+
 type Search = Record<string, string | string[] | undefined>;
 const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
@@ -45,12 +48,12 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
           <input name="q" type="search" defaultValue={query.q ?? ""} placeholder="Title, notes or part: flattener, M48, wheel…" className={inputClass} />
         </label>
         <label className="flex items-center gap-2 py-2 text-sm">
-          <input type="checkbox" name="reference" value="1" defaultChecked={query.reference} className="h-4 w-4 accent-[var(--c-brass)]" />
+          <input type="checkbox" name="reference" value="1" defaultChecked={query.reference} className={CHECKBOX} />
           Reference builds only
         </label>
         {user ? (
           <label className="flex items-center gap-2 py-2 text-sm">
-            <input type="checkbox" name="mine" value="1" defaultChecked={mine} className="h-4 w-4 accent-[var(--c-brass)]" />
+            <input type="checkbox" name="mine" value="1" defaultChecked={mine} className={CHECKBOX} />
             Only mine
           </label>
         ) : null}

@@ -11,12 +11,14 @@ export function BuildCard({ build, showVisibility = false }: { build: BuildSumma
   const inside = build.errorMm === null || build.toleranceMm === null || Math.abs(build.errorMm) <= build.toleranceMm + 1e-6;
   return (
     <li className={`relative flex flex-col gap-3 rounded-lg border bg-surface p-4 ${build.endorsed ? "border-brass/60" : "border-line"}`}>
-      <div className="flex flex-wrap items-center gap-1.5">
-        {build.endorsed ? <ReferenceBadge /> : null}
-        {!build.fits ? <FitBadge fits={false} /> : null}
-        {showVisibility ? <VisibilityBadge visibility={build.visibility} /> : null}
-        {build.hidden ? <HiddenBadge /> : null}
-      </div>
+      {build.endorsed || !build.fits || showVisibility || build.hidden ? (
+        <div className="flex flex-wrap items-center gap-1.5">
+          {build.endorsed ? <ReferenceBadge /> : null}
+          {!build.fits ? <FitBadge fits={false} /> : null}
+          {showVisibility ? <VisibilityBadge visibility={build.visibility} /> : null}
+          {build.hidden ? <HiddenBadge /> : null}
+        </div>
+      ) : null}
       <h2 className="text-base font-semibold leading-snug text-ink">
         <Link href={`/b/${build.slug}`} className="underline-offset-4 after:absolute after:inset-0 hover:underline">{build.title}</Link>
       </h2>

@@ -4,14 +4,15 @@ import type { PlanResponse } from "@/lib/planner/api-types";
 import type { Chain } from "@/lib/solver/types";
 
 /** The numbers an expert checks first: where the sensor lands against the window, and the optics. */
-export function BuildFacts({ result, chain }: { result: PlanResponse; chain: Chain }) {
+export function BuildFacts({ result, chain, stale = false }: { result: PlanResponse; chain: Chain; stale?: boolean }) {
   const ctx = result.context;
   const inside = landsInside(chain, result.toleranceMm);
   const weight = chain.steps.reduce((g, s) => g + (ctx.items[s.partId]?.weightG ?? 0), 0);
   const facts: { label: string; value: string; note?: string; tone?: "ok" | "bad" }[] = [
     {
       label: "Sensor lands at", value: formatMm(chain.sensorDistanceMm, 2),
-      note: chain.errorMm === null ? "no back focus to meet" : `${signedMm(chain.errorMm)} mm from target`, tone: inside ? "ok" : "bad",
+      note: stale ? "as saved: see the re-check above" : chain.errorMm === null ? "no back focus to meet" : `${signedMm(chain.errorMm)} mm from target`,
+      tone: stale ? undefined : inside ? "ok" : "bad",
     },
     ...(result.targetMm !== null ? [{
       label: "Target", value: `${result.targetMm.toFixed(2)} ± ${(result.toleranceMm ?? 0).toFixed(2)} mm`,

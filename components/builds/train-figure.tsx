@@ -100,7 +100,7 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
   };
 
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full min-w-[720px] font-sans" role="img"
+    <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full min-w-[880px] font-sans" role="img"
       aria-label={`The train from sky to sensor: ${train.items.map((i) => i.name).join(", then ")}. The sensor sits ${chain.sensorDistanceMm.toFixed(1)} mm behind the optics${targetMm !== null ? `; the target is ${targetMm.toFixed(2)} mm` : ""}.`}>
       <defs>
         <pattern id="filter-hatch" width="5" height="5" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
@@ -119,7 +119,7 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
             <g key={i}>
               <line x1={j.cx} y1={labelY + 4} x2={j.cx} y2={CY - 20} stroke="var(--c-line)" />
               <rect x={j.cx - 2.5} y={CY - 16} width={5} height={32} rx={1} fill={`hsl(${hue} 55% 45%)`} className="night:fill-brass" />
-              <text x={j.cx} y={labelY} fontSize={11} textAnchor="middle" className="code" fill="var(--c-brass-ink)">{j.label}</text>
+              <text x={j.cx} y={labelY} fontSize={11} textAnchor="middle" fontFamily="var(--font-mono)" fill="var(--c-brass-ink)">{j.label}</text>
             </g>
           );
         })}

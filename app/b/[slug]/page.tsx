@@ -102,14 +102,14 @@ export default async function BuildPage({ params }: Props) {
         <ButtonLink href={planHrefOf(build.request as PlanInput, result, build.solutionIndex)} variant="secondary">Open in planner</ButtonLink>
       </header>
 
-      <BuildFacts result={result} chain={chain} />
+      <BuildFacts result={result} chain={chain} stale={!build.fits} />
 
       <section aria-labelledby="train-heading" className="rounded-lg border border-line bg-surface p-4">
         <h2 id="train-heading" className="sr-only">The train</h2>
         <div className="overflow-x-auto">
           <TrainFigure train={buildTrainOf(result, chain)} chain={chain} targetMm={result.targetMm} toleranceMm={result.toleranceMm} filterShiftMm={result.filterShiftMm} />
         </div>
-        <p className="mt-2 text-xs text-muted">Sky on the left, sensor on the right. Behind the optics every box is drawn to scale; joint labels give the thread or barrel and which side is male (♂) or female (♀).</p>
+        <p className="mt-2 text-xs text-muted"><span className="sm:hidden">Drag sideways to follow the train to the sensor. </span>Sky on the left, sensor on the right. Behind the optics every box is drawn to scale; joint labels give the thread or barrel and which side is male (♂) or female (♀).</p>
       </section>
 
       {chain.warnings.length ? (
