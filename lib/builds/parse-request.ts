@@ -12,7 +12,9 @@ const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in
  * build can name its parts and be re-checked when the catalog changes.
  */
 export function parseBuildPlanRequest(raw: unknown, prefix = "request"): PlanInput {
-  const { extras, rest } = splitPlanExtras(raw);
+  // A plan that names neither parts nor a source means the whole catalog (the planner's default).
+  const body = typeof raw === "object" && raw !== null && !("parts" in raw) && !("source" in raw) ? { ...raw, source: { kind: "catalog" } } : raw;
+  const { extras, rest } = splitPlanExtras(body);
   const parsedExtras = planExtrasSchema.safeParse(extras);
   const parsed = solveApiRequestSchema.safeParse(rest);
   if (!parsed.success || !parsedExtras.success) {

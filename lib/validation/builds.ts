@@ -17,9 +17,9 @@ const visibility = z.enum(BUILD_VISIBILITIES, { message: "One of: private, unlis
 export const createBuildSchema = z.object({
   title,
   notes: notes.optional(),
-  visibility,
+  visibility: visibility.default("unlisted"),
   request: z.unknown().refine((v) => typeof v === "object" && v !== null && !Array.isArray(v), "The plan to save (the solve request)"),
-  solutionIndex: z.number({ message: "Which solution to save: 0 is the best" }).int("A whole number").min(0, "0 or more").max(100, "At most 100"),
+  solutionIndex: z.number({ message: "Which solution to save: 0 is the best" }).int("A whole number").min(0, "0 or more").max(100, "At most 100").default(0),
 }).strict();
 export type CreateBuildInput = z.infer<typeof createBuildSchema>;
 

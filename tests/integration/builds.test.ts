@@ -34,6 +34,14 @@ describe("saving a build", () => {
     expect(build.audit).toBeUndefined();
   });
 
+  it("defaults to an unlisted build of the best solution drawn from the whole catalog", async () => {
+    const { source: _source, ...bare } = flagshipRequest;
+    const res = await v.owner.post("/api/v1/builds", { title: "Bare plan", request: bare });
+    expect(res.status).toBe(201);
+    const build = await (await v.owner.get(`/api/v1/builds/${(await res.json()).slug}`)).json();
+    expect(build).toMatchObject({ visibility: "unlisted", solutionIndex: 0, request: { source: { kind: "catalog" } } });
+  });
+
   it("never takes a result from the client", async () => {
     const res = await v.owner.post("/api/v1/builds", { title: "Forged", visibility: "public", request: flagshipRequest, solutionIndex: 0, result: { solutions: [] } });
     expect(res.status).toBe(400);
