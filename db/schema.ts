@@ -161,7 +161,12 @@ export const builds = pgTable("builds", {
   hiddenReason: text("hidden_reason"),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
-}, (t) => [index("builds_owner_idx").on(t.ownerId), index("builds_visibility_idx").on(t.visibility)]);
+}, (t) => [
+  index("builds_owner_idx").on(t.ownerId),
+  index("builds_listing_idx").on(t.visibility, t.endorsedAt, t.createdAt),
+  // The re-check finds builds by the catalog parts they use.
+  index("builds_part_ids_idx").using("gin", t.partIds),
+]);
 
 export const buildThreads = pgTable("build_threads", {
   id: text("id").primaryKey().default(sql`gen_random_uuid()::text`),
