@@ -2,6 +2,8 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
+  // Lets two servers run from one checkout (NEXT_DIST_DIR=.next-b npm run dev).
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   typedRoutes: false,
   serverExternalPackages: ["pg", "nodemailer", "smtp-server", "s3rver", "mailparser"],
   images: { unoptimized: true },

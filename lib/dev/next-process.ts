@@ -15,7 +15,7 @@ function newestMtime(p: string): number {
 }
 
 export function buildIsStale(root: string): boolean {
-  const buildId = path.join(root, ".next", "BUILD_ID");
+  const buildId = path.join(root, process.env.NEXT_DIST_DIR ?? ".next", "BUILD_ID");
   if (!existsSync(buildId)) return true;
   const built = statSync(buildId).mtimeMs;
   return SOURCES.some((s) => newestMtime(path.join(root, s)) > built);
