@@ -8,32 +8,21 @@ import { BASE_URL } from "../support/http";
 
 const f = DEMO_CASES.flagship;
 const planQuery = new URLSearchParams({ optics: f.telescope!, corrector: f.optics, camera: f.camera, stations: f.stations.join(","), filter: String(f.filterThicknessMm), n: "1.5" });
-const solveBody = {
-  optics: { partId: f.telescope }, corrector: { partId: f.optics }, camera: { partId: f.camera },
-  stations: f.stations.map((partId) => ({ partId })), filters: [{ thicknessMm: f.filterThicknessMm, refractiveIndex: 1.5 }], source: { kind: "catalog" },
-};
 
-/** Save through the planner's "Save as link" dialog; through the same API call when the planner has no button yet. */
+/** Save through the planner's "Save as link" dialog, as a member does. */
 async function saveFromPlanner(page: Page, title: string): Promise<string> {
   await page.goto(`${BASE_URL}/plan?${planQuery}`);
   const open = page.getByRole("button", { name: "Save as link" });
-  if (await open.first().waitFor({ timeout: 30_000 }).then(() => true, () => false)) {
-    await page.waitForSelector('#plan-answer[aria-busy="false"]', { timeout: 30_000 }).catch(() => undefined);
-    await open.first().click();
-    const dialog = page.getByRole("dialog");
-    await dialog.getByLabel("Title").fill(title);
-    await dialog.getByText("Public", { exact: true }).click();
-    await dialog.getByRole("button", { name: "Save build" }).click();
-    const link = dialog.getByLabel("Link to this build");
-    await link.waitFor({ timeout: 30_000 });
-    return new URL(await link.inputValue()).pathname.split("/").pop()!;
-  }
-  const saved = await page.evaluate(async (body) => {
-    const res = await fetch("/api/v1/builds", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    return { status: res.status, json: await res.json() };
-  }, { title, visibility: "public", request: solveBody, solutionIndex: 0 });
-  expect(saved.status).toBe(201);
-  return saved.json.slug as string;
+  await open.first().waitFor({ timeout: 30_000 });
+  await page.waitForSelector('#plan-answer[aria-busy="false"]', { timeout: 30_000 }).catch(() => undefined);
+  await open.first().click();
+  const dialog = page.getByRole("dialog");
+  await dialog.getByLabel("Title").fill(title);
+  await dialog.getByText("Public", { exact: true }).click();
+  await dialog.getByRole("button", { name: "Save build" }).click();
+  const link = dialog.getByLabel("Link to this build");
+  await link.waitFor({ timeout: 30_000 });
+  return new URL(await link.inputValue()).pathname.split("/").pop()!;
 }
 
 describe("builds in Chromium", () => {
