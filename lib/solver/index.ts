@@ -3,7 +3,7 @@
 
 import { materialize } from "./chain";
 import { findNearest } from "./nearest";
-import { connectable, prepare } from "./problem";
+import { connectable, prepare, type Problem } from "./problem";
 import { noConnectionReason, outOfReachReason, tooLongReason } from "./reasons";
 import { searchSolutions } from "./search";
 import { findShortest } from "./shortest";
@@ -15,6 +15,12 @@ export { getModel as warmCatalog } from "./model";
 
 export function solveTrain(request: SolveRequest): SolveResult {
   const p = prepare(request);
+  const result = solve(p);
+  if (p.work.exhausted) result.truncated = true;
+  return result;
+}
+
+function solve(p: Problem): SolveResult {
   const base = { targetMm: p.target, toleranceMm: p.tol, filterShiftMm: p.filterShift };
   if (!connectable(p)) {
     return { status: "no-connection", ...base, shortest: null, solutions: [], reason: noConnectionReason(p, null) };

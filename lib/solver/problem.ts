@@ -41,7 +41,16 @@ export type Problem = {
   blockedLeg: number;
   /** Per leg: faces reachable from the leg's start(s), ignoring limits (for reasons). */
   fwd: Uint8Array[];
+  /** Search states every search of this request may still visit (see WORK_LIMIT). */
+  work: { left: number; exhausted: boolean };
 };
+
+/**
+ * A safety net, not a tuning knob: with thousands of arbitrary-length spacers on one face
+ * the exact top-k is a k-SUM problem that no method answers in milliseconds. Past this many
+ * search states a request stops and says so (`truncated`) instead of holding the server.
+ */
+export const WORK_LIMIT = 2_000_000;
 
 function mountsOf(faces: FaceTable, p: Part, station: number): StationMount[] {
   if (!p.front || !p.rear) return [];
@@ -140,6 +149,7 @@ export function prepare(req: SolveRequest): Problem {
     maxParts: Math.max(0, Math.floor(req.maxParts ?? DEFAULT_MAX_PARTS)),
     maxSolutions: Math.max(1, Math.floor(req.maxSolutions ?? DEFAULT_MAX_SOLUTIONS)),
     rel, loc, exits, blockedLeg, fwd,
+    work: { left: WORK_LIMIT, exhausted: false },
   };
 }
 

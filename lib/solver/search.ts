@@ -32,10 +32,19 @@ export function searchSolutions(p: Problem, t: Tables): Found[] {
     promising(leg, li, r, cmin, cadj, price) {
       if (!top.full) return true;
       const ti = li * W + r;
-      const err = T === null ? 0 : reach!.distance(leg, li, r, T - cmin - cadj, T - cmin);
-      const bound = { k, err, price: price + t.minPrice[leg][ti], d: cmin + t.minLen[leg][ti] };
+      const worst = top.worst!;
+      const dMin = cmin + t.minLen[leg][ti];
+      let err = 0, d = dMin;
+      if (T !== null) {
+        // Relaxed least |D − T|: from the bitsets where built, else from the length range.
+        const dMax = cmin + cadj + t.maxLen[leg][ti];
+        err = Math.max(0, dMin - T, T - dMax, reach!.distance(leg, li, r, T - cmin - cadj, T - cmin));
+        // A chain that ties on |error| with the last place has D = T ± that error.
+        d = Math.max(dMin, T - worst.err);
+      }
+      const bound = { k, err, price: price + t.minPrice[leg][ti], d };
       // Ties with the current last place are pruned too: equal keys may come out either way.
-      return cmpKey(bound, top.worst!) < 0;
+      return cmpKey(bound, worst) < 0;
     },
     complete(dMin, dMax, price, moves) {
       let d = dMin, err = 0;

@@ -111,7 +111,8 @@ export function constrainedShortest(p: Problem, t: Tables, ignoreStock = false):
 
   const dfs = (leg: number, f: number, cmin: number, u: number): void => {
     const li = p.loc[leg][f];
-    if (li < 0) return;
+    if (li < 0 || p.work.exhausted) return;
+    if (--p.work.left < 0) { p.work.exhausted = true; return; }
     const budget = p.maxParts - u;
     if (cmin + atMost[leg][li * W + budget] >= best) return;
     if (leg === p.S && f === p.camEntry) {

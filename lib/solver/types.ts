@@ -108,6 +108,11 @@ export type SolveResult = {
    * "out-of-reach"): the largest reachable D below it and the smallest above it.
    */
   nearest?: Nearest;
+  /**
+   * Present (true) only when the search hit its safety limit (thousands of arbitrary-length
+   * spacers on one face): the chains returned are real, but better ones may exist.
+   */
+  truncated?: true;
 };
 
 export const DEFAULT_MAX_PARTS = 10;

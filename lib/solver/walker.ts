@@ -28,6 +28,7 @@ const SLACK = 1e-9;
  */
 export const tuning = { walkBudget: 4000 };
 const ABORT = Symbol("sharpen the bound and walk again");
+const EXHAUSTED = Symbol("out of work for this request");
 
 function lowerBound(arr: Float64Array, from: number, to: number, x: number): number {
   let lo = from, hi = to;
@@ -62,7 +63,7 @@ export class Walker {
    */
   run(k: number): void {
     const { p } = this;
-    if (p.start < 0 || p.loc[0][p.start] < 0) return;
+    if (p.start < 0 || p.loc[0][p.start] < 0 || p.work.exhausted) return;
     this.k = k;
     this.t.ensure(k);
     let budget = tuning.walkBudget;
@@ -77,6 +78,7 @@ export class Walker {
         this.node(0, p.start, 0, 0, 0, 0, -1);
         return;
       } catch (e) {
+        if (e === EXHAUSTED) { p.work.exhausted = true; return; }
         if (e !== ABORT) throw e;
         reach!.ensure(reach!.level + 1);
         budget = Math.max(1, budget * 2);
@@ -90,6 +92,7 @@ export class Walker {
     if (li < 0) return;
     this.nodes++;
     if (++this.spent > this.budget) throw ABORT;
+    if (--p.work.left < 0) throw EXHAUSTED;
     const r = this.k - u;
     const W = t.R + 1;
     const ti = li * W + r;
