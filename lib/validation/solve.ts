@@ -65,8 +65,8 @@ const partsList = z.array(solvePartSchema).max(LIMITS.parts, `At most ${LIMITS.p
 const stationsList = <T extends z.ZodType>(item: T) => z.array(item).max(LIMITS.stations, `At most ${LIMITS.stations} stations`);
 const common = {
   filters: z.array(solveFilterSchema).max(LIMITS.filters, `At most ${LIMITS.filters} filters`).optional(),
-  maxParts: z.number().int().min(0).max(LIMITS.maxParts, `At most ${LIMITS.maxParts} parts per chain`).optional(),
-  maxSolutions: z.number().int().min(1).max(LIMITS.maxSolutions, `At most ${LIMITS.maxSolutions} solutions`).optional(),
+  maxParts: z.number().int("A whole number of parts").min(0, "Cannot be negative").max(LIMITS.maxParts, `At most ${LIMITS.maxParts} parts per chain`).optional(),
+  maxSolutions: z.number().int("A whole number of solutions").min(1, "At least 1 solution").max(LIMITS.maxSolutions, `At most ${LIMITS.maxSolutions} solutions`).optional(),
 };
 
 /** Exactly SolveRequest (SOLVER.md), with bounds. */

@@ -1,7 +1,7 @@
 // An independent, deliberately naive reading of SOLVER.md: enumerate every chain (every
 // order, every orientation, every leg) within maxParts and stock, then apply the contract's
 // rules to the whole list. Exponential; meant for catalogs of a handful of parts.
-import type { Part, Port, SolveRequest } from "@/lib/solver";
+import type { Camera, Gender, Optics, Part, Port, SolveRequest } from "@/lib/solver";
 
 export type OracleChain = {
   items: { part: Part; role: "connector" | "station" | "camera"; reversed: boolean }[];
@@ -210,4 +210,32 @@ export function chainProblems(req: SolveRequest, chain: import("@/lib/solver").C
     }
   }
   return problems;
+}
+
+// ---- Builders for hand-made trade cases (invented parts, real interface codes). ----
+
+
+export const T2 = "M42x0.75";
+export const M42x1 = "M42x1";
+export const M48 = "M48x0.75";
+export const SCT = "2in-24tpi";
+
+export const port = (iface: string, gender: Gender): Port => ({ interface: iface, gender });
+export const male = (iface: string) => port(iface, "male");
+export const female = (iface: string) => port(iface, "female");
+
+export function part(id: string, front: Port | null, rear: Port | null, lengthMm: number, extra: Partial<Part> = {}): Part {
+  return { id, name: extra.name ?? id, front, rear, lengthMm, ...extra };
+}
+
+/** A spacer on one thread: female towards the sky, male towards the sensor. */
+export const spacer = (id: string, iface: string, lengthMm: number, extra: Partial<Part> = {}) =>
+  part(id, female(iface), male(iface), lengthMm, extra);
+
+export function corrector(extra: Partial<Optics> = {}): Optics {
+  return { id: "corrector", name: "Field flattener", front: null, rear: male(M48), lengthMm: 0, backFocusMm: 55, ...extra };
+}
+
+export function camera(extra: Partial<Camera> = {}): Camera {
+  return { id: "camera", name: "Cooled camera", front: female(T2), rear: null, lengthMm: 17.5, ...extra };
 }
