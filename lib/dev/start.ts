@@ -2,8 +2,9 @@
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "@/seed/accounts";
+import { seedDemoBuilds } from "@/seed/demo-builds";
 import { seedDemo } from "@/seed/index";
-import { buildApp, buildIsStale, serveApp } from "./next-process";
+import { buildApp, buildIsStale, serveApp, waitForHealth } from "./next-process";
 import { startServices } from "./services";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "..");
@@ -32,6 +33,8 @@ try {
   }
   child = serveApp(root, { port, dev, env });
   child.on("exit", (code) => void shutdown(code ?? 0));
+  await waitForHealth(`http://127.0.0.1:${port}`, dev ? 300_000 : 120_000);
+  await seedDemoBuilds(`http://127.0.0.1:${port}`).catch((err) => console.error(`[seed] demo builds skipped: ${(err as Error).message}`));
   console.log(`\nTrainyard: http://127.0.0.1:${port}  (demo password: ${DEMO_PASSWORD})`);
   console.log(`Demo accounts: ${DEMO_ACCOUNTS.map((a) => a.email).join(", ")}\n`);
 } catch (err) {
