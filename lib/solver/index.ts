@@ -16,7 +16,10 @@ export { getModel as warmCatalog } from "./model";
 export function solveTrain(request: SolveRequest): SolveResult {
   const p = prepare(request);
   const result = solve(p);
-  if (p.work.exhausted) result.truncated = true;
+  if (p.work.exhausted) {
+    result.truncated = true;
+    if (result.reason) result.reason = `The search stopped early (too many combinations to try them all), so this may be wrong: ${result.reason}`;
+  }
   return result;
 }
 

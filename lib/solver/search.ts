@@ -5,8 +5,8 @@
 import type { Problem } from "./problem";
 import { Reach, requestGrain } from "./reach";
 import type { Tables } from "./tables";
-import { cmpKey, type Found, TopK } from "./topk";
-import { Walker } from "./walker";
+import { cmpKey, type Found, RANK_EPS, TopK } from "./topk";
+import { type Bound, Walker } from "./walker";
 
 function multisetKey(p: Problem, moves: readonly number[]): string {
   const ids: string[] = [];
@@ -29,22 +29,29 @@ export function searchSolutions(p: Problem, t: Tables): Found[] {
 
   const walker = new Walker(p, t, reach, {
     need: () => need,
-    promising(leg, li, r, cmin, cadj, price) {
-      if (!top.full) return true;
-      const ti = li * W + r;
-      const worst = top.worst!;
-      const dMin = cmin + t.minLen[leg][ti];
-      let err = 0, d = dMin;
-      if (T !== null) {
-        // Relaxed least |D − T|: from the bitsets where built, else from the length range.
-        const dMax = cmin + cadj + t.maxLen[leg][ti];
-        err = Math.max(0, dMin - T, T - dMax, reach!.distance(leg, li, r, T - cmin - cadj, T - cmin));
-        // A chain that ties on |error| with the last place has D = T ± that error.
-        d = Math.max(dMin, T - worst.err);
-      }
-      const bound = { k, err, price: price + t.minPrice[leg][ti], d };
-      // Ties with the current last place are pruned too: equal keys may come out either way.
-      return cmpKey(bound, worst) < 0;
+    order: {
+      bound(leg, li, r, cmin, cadj, price): Bound | null {
+        const ti = li * W + r;
+        const worst = top.full ? top.worst! : null;
+        const dMin = cmin + t.minLen[leg][ti];
+        let err = 0, d = dMin;
+        if (T !== null) {
+          // Relaxed least |D − T|: from the bitsets where built, else from the length range.
+          const dMax = cmin + cadj + t.maxLen[leg][ti];
+          err = Math.max(0, dMin - T, T - dMax, reach!.distance(leg, li, r, T - cmin - cadj, T - cmin));
+          // A chain that ties on |error| with the last place has D = T ± that error.
+          if (worst) d = Math.max(dMin, T - worst.err);
+        }
+        const bound = { err, price: price + t.minPrice[leg][ti], d };
+        // Ties with the current last place are pruned too: equal keys may come out either way.
+        return worst && cmpKey({ k, ...bound }, worst) >= 0 ? null : bound;
+      },
+      verdict(b) {
+        if (!top.full) return "go";
+        const worst = top.worst!;
+        if (b.err > worst.err + RANK_EPS) return "stop"; // siblings come in |error| order
+        return cmpKey({ k, ...b }, worst) >= 0 ? "skip" : "go";
+      },
     },
     complete(dMin, dMax, price, moves) {
       let d = dMin, err = 0;
