@@ -94,12 +94,14 @@ export const requestArb: fc.Arbitrary<SolveRequest> = fc.record({
 
 /**
  * The walk builds its bitset bound only when a search proves expensive, which small catalogs
- * never do; with a zero budget it builds it on every level, so both paths are compared.
+ * never do, and bounds-and-sorts siblings unless there are very many; this runs the other
+ * way on both counts (bitsets on every level, siblings in length order), so both are compared.
  */
 function withBitsetsEverywhere<T>(run: () => T): T {
-  const saved = tuning.walkBudget;
+  const saved = { ...tuning };
   tuning.walkBudget = 0;
-  try { return run(); } finally { tuning.walkBudget = saved; }
+  tuning.sortLimit = 0;
+  try { return run(); } finally { Object.assign(tuning, saved); }
 }
 
 function multisetOfChain(chain: SolveResult["solutions"][number]): string {
