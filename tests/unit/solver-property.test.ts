@@ -42,7 +42,9 @@ function partArb(ifaces: string[], coarse: boolean, id: string): fc.Arbitrary<Pa
   }));
 }
 
-export const requestArb: fc.Arbitrary<SolveRequest> = fc.record({
+/** A request, and sometimes where to aim its back focus among the real chains (set in the property). */
+export type AimedRequest = SolveRequest & { aim?: { pick: number; offset: number } };
+export const requestArb: fc.Arbitrary<AimedRequest> = fc.record({
   nIf: fc.integer({ min: 3, max: 6 }),
   nParts: fc.integer({ min: 2, max: 8 }),
   nStations: fc.integer({ min: 0, max: 2 }),
