@@ -25,7 +25,7 @@ export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]):
           code: "vignetting",
           partId: step.partId,
           message: `${nameOf(parts[i])} clears ${mm(ca)} but needs ${mm(need)} at ${mm(d)} from the sensor ` +
-            `(a ${mm(s)} diagonal plus ${mm(d)} / f/${N}), so the corners will darken.`,
+            `(a ${mm(s)} diagonal plus ${mm(d)} / f/${Number(N.toFixed(2))}), so the corners will darken.`,
         });
       }
     });

@@ -2,7 +2,7 @@
 // Two shapes: "trade" looks like a real catalog (many spacers in stock lengths, adapters
 // between popular threads, a few couplers and adjustable parts); "uniform" draws every face
 // at random over all interfaces, a denser and less friendly graph.
-import type { Part, Port, SolveRequest } from "../lib/solver";
+import type { Part, Port, SolveRequest } from "../../lib/solver";
 
 export function rng(seed: number): () => number {
   let a = seed >>> 0;

@@ -2,11 +2,11 @@
 // parts over 40 interfaces, two stations, 55 mm target. Prints median time per request
 // (graph cached, as the catalog route uses it), graph build time, and the ratio to one plain
 // dijkstra.bidirectional on a graph of the same parts (node per face and leg, lightest edge
-// per pair). `--write` also saves the tables to bench/RESULTS.md.
+// per pair). `--write` also saves the tables to tests/bench/RESULTS.md.
 import { writeFileSync } from "node:fs";
 import Graph from "graphology";
 import { dijkstra } from "graphology-shortest-path";
-import { solveTrain, warmCatalog, type Part, type SolveRequest } from "../lib/solver";
+import { solveTrain, warmCatalog, type Part, type SolveRequest } from "../../lib/solver";
 import { makeCatalog, makeRequests, type Shape } from "./catalog";
 
 const SIZES = [1_000, 10_000, 50_000];
@@ -126,7 +126,7 @@ if (process.argv.includes("--write")) {
   writeFileSync(new URL("./RESULTS.md", import.meta.url), [
     "# Solver benchmark",
     "",
-    "`npm run bench` (bench/solver.bench.ts). 40 interfaces, two stations (an off-axis guider and a reversible filter wheel),",
+    "`npm run bench` (tests/bench/solver.bench.ts). 40 interfaces, two stations (an off-axis guider and a reversible filter wheel),",
     "55 mm back focus plus 2 mm of filter glass, 12 different requests per catalog, 5 rounds; the graph is built once",
     "per parts array and reused, as the catalog route does. \"dijkstra.bidirectional\" is one plain call on a graph of",
     "the same parts (node per face and leg, lightest edge per pair), built beforehand and not timed; ratio = median",
