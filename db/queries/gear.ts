@@ -19,3 +19,9 @@ export async function setOwnedQuantity({ userId, partId, quantity }: { userId: s
   await db.insert(ownedParts).values({ userId, partId, quantity })
     .onConflictDoUpdate({ target: [ownedParts.userId, ownedParts.partId], set: { quantity } });
 }
+
+export async function getOwnedQuantity({ userId, partId }: { userId: string; partId: string }): Promise<number> {
+  const [row] = await db.select({ quantity: ownedParts.quantity }).from(ownedParts)
+    .where(and(eq(ownedParts.userId, userId), eq(ownedParts.partId, partId)));
+  return row?.quantity ?? 0;
+}

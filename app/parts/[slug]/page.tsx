@@ -1,7 +1,10 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getPartOrThrow } from "@/db/queries/parts";
+import { CorrectPartForm } from "@/components/parts/correct-part-form";
+import { OwnButton } from "@/components/parts/own-button";
 import { PartProfile } from "@/components/parts/part-profile";
+import { getOwnedQuantity } from "@/db/queries/gear";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { SafetyNote } from "@/components/safety-note";
 import { ButtonLink } from "@/components/ui/button";
@@ -36,6 +39,7 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
     throw err;
   }
   const p = rowToApiPart(row);
+  const owned = user ? await getOwnedQuantity({ userId: user.id, partId: row.id }) : 0;
   const s = row.specs;
   const numbers: [string, string][] = [
     ["Optical length", `${formatMm(p.lengthMm)}${p.adjustMm ? ` to ${formatMm(p.lengthMm + p.adjustMm)} (adjustable)` : ""}`],
@@ -65,7 +69,10 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
           <h1 className="text-3xl font-semibold tracking-tight text-ink">{p.model}</h1>
           <p className="mt-1 text-muted">{KIND_LABELS[p.kind]}{s.opticsRole ? ` · ${s.opticsRole}` : ""}{row.status !== "approved" ? ` · ${row.status}` : ""}</p>
         </div>
-        <ButtonLink href={planHref(p.kind, p.slug)}>Plan with this</ButtonLink>
+        <div className="flex flex-wrap items-center gap-3">
+          {user && row.status === "approved" ? <OwnButton partId={row.id} initialQuantity={owned} /> : null}
+          <ButtonLink href={planHref(p.kind, p.slug)}>Plan with this</ButtonLink>
+        </div>
       </header>
       {p.description ? <p className="max-w-3xl text-text">{p.description}</p> : null}
       <section aria-label="Faces" className="grid items-center gap-6 rounded-lg border border-line bg-surface p-5 md:grid-cols-[1.4fr_1fr]">
@@ -92,6 +99,7 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
           ))}
         </dl>
       </section>
+      {isModerator(user) ? <CorrectPartForm slug={p.slug} initial={{ lengthMm: p.lengthMm, adjustMm: p.adjustMm, clearApertureMm: p.clearApertureMm, weightG: p.weightG, listPriceCents: p.listPriceCents }} /> : null}
       {p.kind === "optics" ? <SafetyNote /> : null}
     </article>
   );
