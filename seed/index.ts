@@ -3,14 +3,16 @@ import pg from "pg";
 import * as schema from "@/db/schema";
 import { seedAccounts } from "./accounts";
 import { seedCatalog } from "./catalog-load";
+import { seedGear } from "./gear";
 
 /** Seed the demo scenario: accounts, the demo shop and the invented catalog. Safe to repeat. */
 export async function seedDemo(databaseUrl: string, log: (m: string) => void = console.log) {
   const pool = new pg.Pool({ connectionString: databaseUrl, max: 2 });
   const db = drizzle(pool, { schema });
   try {
-    await seedAccounts(db);
+    const ids = await seedAccounts(db);
     const added = await seedCatalog(db);
+    await seedGear(db, ids["member@trainyard.test"]);
     log(`[seed] demo accounts ready; ${added} catalog parts added`);
   } finally {
     await pool.end();

@@ -105,20 +105,30 @@ describe("planning with owned gear", () => {
     expect(signedOut.status).toBe(401);
 
     const member = await signedIn("member@trainyard.test");
+    type Owned = { part: { slug: string }; quantity: number };
+    const gearNow = async () => new Map(((await (await member.get("/api/v1/gear")).json()).items as Owned[]).map((i) => [i.part.slug, i.quantity]));
+    const before = await gearNow();
     const first = await solve(flagshipBody(), member);
-    const bought = first.body.solutions[0].steps.filter((s: { role: string }) => s.role === "connector").map((s: { partId: string }) => s.partId);
-    for (const slug of bought) expect((await member.request("/api/v1/gear", { method: "PUT", json: { partId: slug, quantity: 1 } })).status).toBe(200);
-
-    const owned = await solve(flagshipBody({ source: { kind: "owned" } }), member);
-    expect(owned.status).toBe(200);
-    const best = owned.body.solutions[0];
-    expect(best.priceCents).toBe(0);
-    expect(best.steps.filter((s: { role: string }) => s.role === "connector").every((s: { partId: string }) => s.partId.endsWith("~owned"))).toBe(true);
-
-    const gear = await (await member.get("/api/v1/gear")).json();
-    expect(gear.items.map((i: { part: { slug: string } }) => i.part.slug).sort()).toEqual([...bought].sort());
-    for (const slug of bought) await member.request("/api/v1/gear", { method: "PUT", json: { partId: slug, quantity: 0 } });
-    expect((await (await member.get("/api/v1/gear")).json()).items).toEqual([]);
+    const bought: string[] = first.body.solutions[0].steps.filter((s: { role: string }) => s.role === "connector").map((s: { partId: string }) => s.partId);
+    for (const slug of bought) {
+      const res = await member.request("/api/v1/gear", { method: "PUT", json: { partId: slug, quantity: (before.get(slug) ?? 0) + 1 } });
+      expect(res.status).toBe(200);
+    }
+    try {
+      const owned = await solve(flagshipBody({ source: { kind: "owned" } }), member);
+      expect(owned.status).toBe(200);
+      const best = owned.body.solutions[0];
+      // Same parts count and error as the catalog's best, but free: owned copies win the price tie.
+      expect(best.partCount).toBe(first.body.solutions[0].partCount);
+      expect(best.priceCents).toBe(0);
+      expect(best.steps.filter((s: { role: string }) => s.role === "connector").every((s: { partId: string }) => s.partId.endsWith("~owned"))).toBe(true);
+      expect(owned.body.context.items[best.steps[0].partId].owned).toBe(true);
+      const after = await gearNow();
+      for (const slug of bought) expect(after.get(slug)).toBe((before.get(slug) ?? 0) + 1);
+    } finally {
+      for (const slug of bought) await member.request("/api/v1/gear", { method: "PUT", json: { partId: slug, quantity: before.get(slug) ?? 0 } });
+    }
+    expect(await gearNow()).toEqual(before);
   });
 
   it("answers a bad gear change with field errors", async () => {

@@ -11,7 +11,7 @@ export default async function GearPage() {
   if (!(await getSessionUser())) redirect("/sign-in?next=/account/gear");
   return (
     <div>
-      <PageTitle title="My gear" lead="Parts on your bench. With “Only what I own, then the catalog” the planner uses these first, counts them as free, and lists only what is still to buy.">
+      <PageTitle title="My gear" lead="Parts on your bench. With “What I own, then the catalog” the planner uses these first, counts them as free, and lists only what is still to buy.">
         <ButtonLink href="/plan?source=owned" variant="secondary">Plan with my gear</ButtonLink>
       </PageTitle>
       <GearEditor />
