@@ -71,6 +71,12 @@ describe("POST /api/v1/solve with catalog references", () => {
     expect(wrong.body.error.fields["optics.partId"]).toBeDefined();
   });
 
+  it("says plainly that shop stock is not available yet", async () => {
+    const res = await solve(flagshipBody({ source: { kind: "shop", shopId: "lantern-row-optics" } }));
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields["source.kind"][0]).toMatch(/not available yet/);
+  });
+
   it("refuses absurd sizes", async () => {
     const part = { id: "x", front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm: 1 };
     const many = Array.from({ length: 20_001 }, (_, i) => ({ ...part, id: `p${i}` }));
