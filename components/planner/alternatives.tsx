@@ -18,6 +18,11 @@ export function Alternatives({ solutions, chosen, onChoose, names, unit }: {
 }) {
   const name = useId();
   if (solutions.length < 2) return null;
+  // The ranking puts fewer parts first; someone completing a train from their own bench
+  // often cares more about what is left to buy, so the cheapest answer is marked.
+  const known = solutions.map((c) => c.priceCents ?? Infinity);
+  const cheapest = Math.min(...known);
+  const cheapestIndex = Number.isFinite(cheapest) && cheapest < known[0] ? known.indexOf(cheapest) : -1;
   return (
     <fieldset>
       <legend className="sr-only">Choose an alternative</legend>
@@ -26,7 +31,9 @@ export function Alternatives({ solutions, chosen, onChoose, names, unit }: {
           <label key={i} className={`relative block cursor-pointer rounded-md border px-3 py-2.5 text-sm transition-colors has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-[var(--c-focus)] ${i === chosen ? "border-brass bg-brass/10" : "border-line bg-surface hover:border-brass/60"}`}>
             <input type="radio" name={name} className="sr-only" checked={i === chosen} onChange={() => onChoose(i)} />
             <span className="flex items-baseline justify-between gap-2">
-              <span className="font-semibold text-ink">{i === 0 ? "Best" : `Alternative ${i + 1}`}</span>
+              <span className="font-semibold text-ink">{i === 0 ? "Best" : `Alternative ${i + 1}`}
+                {i === cheapestIndex ? <span className="ml-2 rounded bg-ok/15 px-1.5 py-0.5 text-xs font-medium text-ok">least to buy</span> : null}
+              </span>
               <span className="num text-xs text-muted">
                 {c.partCount} part{c.partCount === 1 ? "" : "s"} · {c.priceCents === null ? "price unknown" : c.priceCents === 0 ? "nothing to buy" : formatPrice(c.priceCents)}
               </span>
