@@ -57,7 +57,9 @@ export function buildOptics(main: PartRowLike, corrector: PartRowLike | null, to
     backFocusToleranceMm: toleranceOverride ?? opt(corr ? corr.backFocusToleranceMm : scope.backFocusToleranceMm),
     focalRatio: opt(focalRatio),
     imageCircleMm: opt(corr?.imageCircleMm ?? scope.imageCircleMm),
-    maxLoadG: opt(scope.maxLoadG),
+    // A separate corrector hangs from the focuser too: what is left for the rest is the rating
+    // minus the corrector's weight.
+    maxLoadG: scope.maxLoadG !== undefined && corrector ? scope.maxLoadG - (corrector.weightG ?? 0) : opt(scope.maxLoadG),
   };
   return { optics, focalLengthMm, apertureMm, focalRatio };
 }

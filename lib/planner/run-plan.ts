@@ -123,6 +123,18 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   });
 
   const result = solveTrain({ ...base, optics, camera, stations, parts });
+  if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
+    // Say it in the focuser's terms: the corrector's weight counts against the same rating.
+    const rating = telescopeRow.specs.maxLoadG;
+    const corrG = correctorRow.weightG ?? 0;
+    for (const chain of [result.shortest, ...result.solutions]) {
+      for (const w of chain?.warnings ?? []) {
+        if (w.code !== "load") continue;
+        const train = chain!.steps.reduce((sum, st) => sum + (parts.find((p) => p.id === st.partId)?.weightG ?? stations.find((p) => p.id === st.partId)?.weightG ?? (st.partId === camera.id ? camera.weightG ?? 0 : 0)), 0);
+        w.message = `With the ${correctorRow.maker} ${correctorRow.model} (${Math.round(corrG)} g), the focuser of the ${telescopeRow.maker} ${telescopeRow.model} carries about ${Math.round(train + corrG)} g, more than the ${Math.round(rating)} g it is rated for.`;
+      }
+    }
+  }
   let telescopeLink: SolveResult | null = null;
   if (telescopeRow && correctorRow) {
     // Telescope → corrector: any mating chain will do (no back focus on this side).
@@ -151,7 +163,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
       stationIds: stations.map((s) => s.id),
       focalLengthMm, apertureMm, focalRatio,
       imageCircleMm: optics.imageCircleMm ?? null,
-      maxLoadG: optics.maxLoadG ?? null,
+      maxLoadG: (telescopeRow ? telescopeRow.specs.maxLoadG : optics.maxLoadG) ?? null,
       ...(cameraRow ? derivedNumbers(cameraRow, focalLengthMm, focalRatio) : {
         sensorWidthMm: null, sensorHeightMm: null, sensorDiagonalMm: camera.sensorDiagonalMm ?? null, pixelSizeUm: null,
         plateScaleArcsecPerPx: null, fieldOfViewDeg: null, criticalFocusZoneUm: null,
