@@ -41,7 +41,16 @@ function createAuth() {
         });
       },
     },
-    rateLimit: { enabled: process.env.TRAINYARD_RATE_LIMIT === "1", window: 60, max: 100 },
+    // On unless switched off (the test runner does, to sign in many times a minute).
+    rateLimit: {
+      enabled: process.env.TRAINYARD_RATE_LIMIT !== "0", window: 60, max: 100,
+      // Enough for a household or a club behind one address, few enough to slow guessing.
+      customRules: {
+        "/sign-in/email": { window: 60, max: 30 },
+        "/sign-up/email": { window: 60, max: 30 },
+        "/request-password-reset": { window: 60, max: 10 },
+      },
+    },
     advanced: { database: { generateId: () => crypto.randomUUID() } },
     plugins: [
       admin({ ac: siteAc, roles: siteRoles, defaultRole: "member", adminRoles: ["admin"] }),
