@@ -37,12 +37,24 @@ export function toErrorResponse(err: unknown): Response {
   return Response.json(body, { status });
 }
 
-/** zod issues → { "a.b": ["message"] } */
-export function fieldErrorsOf(issues: readonly { path: readonly PropertyKey[]; message: string }[]): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
+type Issue = { path: readonly PropertyKey[]; message: string; code?: string; errors?: readonly (readonly Issue[])[] };
+
+function collect(issues: readonly Issue[], prefix: readonly PropertyKey[], out: Record<string, string[]>): void {
   for (const issue of issues) {
-    const key = issue.path.map(String).join(".") || "_";
+    const path = [...prefix, ...issue.path];
+    if (issue.code === "invalid_union" && issue.errors?.length) {
+      // Report the alternative that came closest (fewest problems) rather than "Invalid input".
+      const best = [...issue.errors].sort((a, b) => a.length - b.length)[0];
+      if (best.length) { collect(best, path, out); continue; }
+    }
+    const key = path.length ? path.map(String).join(".") : "_root";
     (out[key] ??= []).push(issue.message);
   }
+}
+
+/** zod issues → { "parts.3.front.interface": ["message"] }; issues about the whole body under "_root". */
+export function fieldErrorsOf(issues: readonly Issue[], prefix: readonly PropertyKey[] = []): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  collect(issues, prefix, out);
   return out;
 }

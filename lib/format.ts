@@ -5,18 +5,6 @@ export const KIND_LABELS: Record<string, string> = {
   "tilt-plate": "Tilt plate", diagonal: "Diagonal", other: "Other",
 };
 
-export function formatMm(mm: number | null | undefined, digits = 1): string {
-  return mm === null || mm === undefined || !Number.isFinite(mm) ? "—" : `${mm.toFixed(digits)} mm`;
-}
-
-export function formatInches(mm: number | null | undefined, digits = 3): string {
-  return mm === null || mm === undefined || !Number.isFinite(mm) ? "—" : `${(mm / 25.4).toFixed(digits)} in`;
-}
-
-export function formatLengthIn(unit: "mm" | "in", mm: number | null | undefined): string {
-  return unit === "in" ? formatInches(mm) : formatMm(mm);
-}
-
 /** Catalog list prices are kept in one currency (cents); set NEXT_PUBLIC_CURRENCY to change it. */
 export const CURRENCY = process.env.NEXT_PUBLIC_CURRENCY ?? "USD";
 const money = new Intl.NumberFormat("en-US", { style: "currency", currency: CURRENCY });

@@ -11,10 +11,10 @@ function fixed(value: number, digits: number): string {
   return Number(text) === 0 ? (0).toFixed(digits) : text;
 }
 
-/** "55.7 mm" — to 0.1 mm. */
-export function formatMm(mm: number): string {
-  if (!Number.isFinite(mm)) return "—";
-  return `${fixed(mm, 1)} mm`;
+/** "55.7 mm" — to 0.1 mm unless told otherwise; "—" when there is no value. */
+export function formatMm(mm: number | null | undefined, digits = 1): string {
+  if (mm === null || mm === undefined || !Number.isFinite(mm)) return "—";
+  return `${fixed(mm, digits)} mm`;
 }
 
 /** A length in the reader's unit: "55.7 mm" or "2.193 in" (0.001 in ≈ 0.03 mm). */

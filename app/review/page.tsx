@@ -5,7 +5,8 @@ import { InterfaceChip } from "@/components/parts/interface-chip";
 import { ReviewActions } from "@/components/review/review-actions";
 import { PageTitle } from "@/components/ui/card";
 import { getSessionUser, isModerator } from "@/lib/auth/session";
-import { KIND_LABELS, formatMm } from "@/lib/format";
+import { KIND_LABELS } from "@/lib/format";
+import { formatMm } from "@/lib/units";
 
 export const metadata = { title: "Review" };
 export const dynamic = "force-dynamic";

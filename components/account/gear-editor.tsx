@@ -3,7 +3,8 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useState } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
-import { KIND_LABELS, formatMm } from "@/lib/format";
+import { KIND_LABELS } from "@/lib/format";
+import { formatMm } from "@/lib/units";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 

@@ -1,5 +1,6 @@
 import { landsInside, signedMm } from "@/lib/builds/train";
-import { formatGrams, formatMm } from "@/lib/format";
+import { formatGrams } from "@/lib/format";
+import { formatMm } from "@/lib/units";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import type { Chain } from "@/lib/solver/types";
 

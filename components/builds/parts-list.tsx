@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { toBuyTotalCents, type ShoppingLine } from "@/lib/builds/chain";
-import { KIND_LABELS, formatMm, formatPrice } from "@/lib/format";
+import { KIND_LABELS, formatPrice } from "@/lib/format";
+import { formatMm } from "@/lib/units";
 
 const ROLE_LABEL: Record<ShoppingLine["role"], string> = {
   telescope: "Telescope", optics: "Optics", station: "Device", connector: "Connecting part", camera: "Camera",

@@ -75,11 +75,16 @@ export async function updatePart({ slug, patch }: { slug: string; patch: import(
     if (rear !== undefined) { set.rearInterface = rear?.interface ?? null; set.rearGender = rear?.gender ?? null; }
     if (specs) set.specs = { ...row.specs, ...specs };
     const [updated] = await tx.update(parts).set(set).where(eq(parts.id, row.id)).returning();
-    if (row.status === "approved") {
-      await tx.insert(catalogState).values({ id: 1, version: 1 }).onConflictDoUpdate({
-        target: catalogState.id, set: { version: sql`${catalogState.version} + 1`, updatedAt: new Date() },
-      });
-    }
+    if (row.status === "approved") await bumpCatalogVersion(tx);
     return updated;
+  });
+}
+
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/** The solver's cache and the builds' re-check key on this: bump it whenever approved parts change. */
+export async function bumpCatalogVersion(tx: Tx | typeof db = db) {
+  await tx.insert(catalogState).values({ id: 1, version: 1 }).onConflictDoUpdate({
+    target: catalogState.id, set: { version: sql`${catalogState.version} + 1`, updatedAt: new Date() },
   });
 }

@@ -1,7 +1,8 @@
 import "server-only";
-import { and, asc, desc, eq, ilike, ne, sql } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, ne } from "drizzle-orm";
 import { db } from "@/db/client";
-import { catalogState, parts, user } from "@/db/schema";
+import { parts, user } from "@/db/schema";
+import { bumpCatalogVersion } from "./parts";
 import { partToRow } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { slugify, type PartParsed } from "@/lib/validation/parts";
@@ -59,13 +60,5 @@ export async function reviewSubmission({ id, reviewerId, decision, reason }: {
     }).where(eq(parts.id, id)).returning();
     if (decision === "approve") await bumpCatalogVersion(tx);
     return updated;
-  });
-}
-
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
-
-export async function bumpCatalogVersion(tx: Tx | typeof db = db) {
-  await tx.insert(catalogState).values({ id: 1, version: 1 }).onConflictDoUpdate({
-    target: catalogState.id, set: { version: sql`${catalogState.version} + 1`, updatedAt: new Date() },
   });
 }

@@ -60,20 +60,22 @@ export function withSession<P>(
   };
 }
 
-/** Parse a JSON body with a zod schema; 400 with field errors when it does not fit. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 8_000_000): Promise<z.output<S>> {
-  const length = Number(request.headers.get("content-length") ?? 0);
-  if (length > maxBytes) throw new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
-  let raw: unknown;
+/** Read a JSON body: 413 past `maxBytes`, 400 when it is not JSON. */
+export async function readJsonBody(request: Request, maxBytes = 8_000_000): Promise<unknown> {
+  const tooLarge = () => new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
+  if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
+  const text = await request.text();
+  if (text.length > maxBytes) throw tooLarge();
   try {
-    const text = await request.text();
-    if (text.length > maxBytes) throw new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
-    raw = JSON.parse(text);
-  } catch (err) {
-    if (err instanceof AppError) throw err;
+    return JSON.parse(text);
+  } catch {
     throw new AppError("bad_request:json", "The request body is not valid JSON.");
   }
-  return parseWith(schema, raw);
+}
+
+/** Parse a JSON body with a zod schema; 400 with field errors when it does not fit. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 8_000_000): Promise<z.output<S>> {
+  return parseWith(schema, await readJsonBody(request, maxBytes));
 }
 
 export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.output<S> {

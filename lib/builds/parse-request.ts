@@ -1,8 +1,7 @@
 // A saved build's `request` is the body of POST /api/v1/solve: validate it with the same schemas.
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import type { PlanInput } from "@/lib/planner/run-plan";
-import { planExtrasSchema, splitPlanExtras } from "@/lib/validation/plan";
-import { solveApiRequestSchema } from "@/lib/validation/solve";
+import { parsePlanRequest } from "@/lib/validation/plan";
 
 const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in v;
 
@@ -14,15 +13,9 @@ const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in
 export function parseBuildPlanRequest(raw: unknown, prefix = "request"): PlanInput {
   // A plan that names neither parts nor a source means the whole catalog (the planner's default).
   const body = typeof raw === "object" && raw !== null && !("parts" in raw) && !("source" in raw) ? { ...raw, source: { kind: "catalog" } } : raw;
-  const { extras, rest } = splitPlanExtras(body);
-  const parsedExtras = planExtrasSchema.safeParse(extras);
-  const parsed = solveApiRequestSchema.safeParse(rest);
-  if (!parsed.success || !parsedExtras.success) {
-    const issues = [...(parsed.success ? [] : parsed.error.issues), ...(parsedExtras.success ? [] : parsedExtras.error.issues)];
-    throw new AppError("bad_request:validation", "The plan to save needs attention.",
-      fieldErrorsOf(issues.map((i) => ({ ...i, path: [prefix, ...i.path] }))));
-  }
-  const input = { ...parsed.data, ...parsedExtras.data } as PlanInput;
+  const parsed = parsePlanRequest(body);
+  if (!parsed.success) throw new AppError("bad_request:validation", "The plan to save needs attention.", fieldErrorsOf(parsed.issues, [prefix]));
+  const input = parsed.data as PlanInput;
   const fields: Record<string, string[]> = {};
   if (!isRef(input.optics)) fields[`${prefix}.optics`] = ["Choose the optics from the catalog ({ partId })"];
   if (!isRef(input.camera)) fields[`${prefix}.camera`] = ["Choose the camera from the catalog ({ partId })"];

@@ -127,10 +127,13 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
     const rating = telescopeRow.specs.maxLoadG;
     const corrG = correctorRow.weightG ?? 0;
+    let weightOf: Map<string, number> | undefined; // built only when a load warning needs it
+
     for (const chain of [result.shortest, ...result.solutions]) {
       for (const w of chain?.warnings ?? []) {
         if (w.code !== "load") continue;
-        const train = chain!.steps.reduce((sum, st) => sum + (parts.find((p) => p.id === st.partId)?.weightG ?? stations.find((p) => p.id === st.partId)?.weightG ?? (st.partId === camera.id ? camera.weightG ?? 0 : 0)), 0);
+        weightOf ??= new Map([...parts, ...stations, camera].map((p) => [p.id, p.weightG ?? 0]));
+        const train = chain!.steps.reduce((sum, st) => sum + (weightOf!.get(st.partId) ?? 0), 0);
         w.message = `With the ${correctorRow.maker} ${correctorRow.model} (${Math.round(corrG)} g), the focuser of the ${telescopeRow.maker} ${telescopeRow.model} carries about ${Math.round(train + corrG)} g, more than the ${Math.round(rating)} g it is rated for.`;
       }
     }

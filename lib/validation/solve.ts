@@ -2,6 +2,7 @@
 // builds. `solveRequestSchema` is exactly SolveRequest; `solveApiRequestSchema` also takes
 // catalog references ({ partId }) and a parts `source` for the route to resolve.
 import { z } from "zod";
+import { fieldErrorsOf } from "@/lib/errors";
 
 export const LIMITS = {
   parts: 20_000,
@@ -110,24 +111,7 @@ export const solveApiRequestSchema = z.object({
 });
 export type SolveApiRequest = z.infer<typeof solveApiRequestSchema>;
 
-type Issue = { path: PropertyKey[]; message: string; code?: string; errors?: Issue[][] };
-
-function collect(issues: readonly Issue[], prefix: PropertyKey[], out: Record<string, string[]>): void {
-  for (const issue of issues) {
-    const path = [...prefix, ...issue.path];
-    if (issue.code === "invalid_union" && issue.errors?.length) {
-      // Report the alternative that came closest (fewest problems) rather than "Invalid input".
-      const best = [...issue.errors].sort((a, b) => a.length - b.length)[0];
-      if (best.length) { collect(best, path, out); continue; }
-    }
-    const key = path.length ? path.map(String).join(".") : "_root";
-    (out[key] ??= []).push(issue.message);
-  }
-}
-
 /** zod issues keyed by dotted path ("parts.3.front.interface"); root issues under "_root". */
 export function zodFieldErrors(error: { issues: readonly unknown[] }): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
-  collect(error.issues as Issue[], [], out);
-  return out;
+  return fieldErrorsOf(error.issues as Parameters<typeof fieldErrorsOf>[0]);
 }

@@ -11,7 +11,8 @@ import { ButtonLink } from "@/components/ui/button";
 import { getSessionUser, isModerator } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
-import { KIND_LABELS, formatGrams, formatMm, formatPrice } from "@/lib/format";
+import { KIND_LABELS, formatGrams, formatPrice } from "@/lib/format";
+import { formatMm } from "@/lib/units";
 import { getInterface } from "@/lib/interfaces";
 
 export const dynamic = "force-dynamic";
