@@ -215,3 +215,5 @@ export type PartRow = typeof parts.$inferSelect;
 export type NewPartRow = typeof parts.$inferInsert;
 export type BuildRow = typeof builds.$inferSelect;
 export type MailRow = typeof mailOutbox.$inferSelect;
+
+export * from "./schema-shops";
