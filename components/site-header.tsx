@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { getSessionUser } from "@/lib/auth/session";
+import { allowed, getSessionUser } from "@/lib/auth/session";
 import { Logo } from "./logo";
 import { NavLinks } from "./nav-links";
 import { NightToggle } from "./night-toggle";
@@ -18,7 +18,7 @@ export async function SiteHeader({ night }: { night: boolean }) {
             { href: "/plan", label: "Planner" },
             { href: "/parts", label: "Parts" },
             { href: "/builds", label: "Builds" },
-            ...(user && (user.role === "moderator" || user.role === "admin") ? [{ href: "/review", label: "Review" }] : []),
+            ...(allowed(user, { part: "review" }) || allowed(user, { build: "moderate" }) ? [{ href: "/review", label: "Review" }] : []),
             { href: user ? "/account" : "/sign-in", label: user ? "Account" : "Sign in" },
           ]}
         />

@@ -16,7 +16,11 @@ function databaseUrl(): string {
 /** The shared pool, created on first use so that `next build` never connects. */
 export function getDb(): Db {
   if (!globalForDb.trainyardDb) {
-    globalForDb.trainyardPool = new pg.Pool({ connectionString: databaseUrl(), max: 10 });
+    // A bounded wait for a connection: while PostgreSQL is down, requests fail fast (503) instead of hanging.
+    const pool = new pg.Pool({ connectionString: databaseUrl(), max: 10, connectionTimeoutMillis: 5_000 });
+    // An idle client dropped by a restarting server must not take the process down; the pool replaces it.
+    pool.on("error", (err) => console.error("database connection lost:", err.message));
+    globalForDb.trainyardPool = pool;
     globalForDb.trainyardDb = drizzle(globalForDb.trainyardPool, { schema });
   }
   return globalForDb.trainyardDb;

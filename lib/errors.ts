@@ -24,9 +24,33 @@ export class AppError extends Error {
 
 export type ErrorBody = { error: { code: string; message: string; fields?: Record<string, string[]> } };
 
+// PostgreSQL unreachable, restarting or shutting down (SQLSTATE classes 08 and 57P, or the
+// driver's own connection errors): the client may retry, so 503 rather than 500.
+const DB_DOWN_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "ENOTFOUND", "57P01", "57P02", "57P03", "53300"]);
+const DB_DOWN_MESSAGES = /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error|the database system is (starting up|shutting down)|terminating connection/i;
+
+/** The error and its causes (drizzle, better-auth and pg wrap one another). */
+function causes(err: unknown): { code?: unknown; message?: unknown }[] {
+  const out: { code?: unknown; message?: unknown }[] = [];
+  for (let e = err, i = 0; e && typeof e === "object" && i < 6; e = (e as { cause?: unknown }).cause, i++) {
+    out.push(e as { code?: unknown; message?: unknown });
+    for (const inner of (e as { errors?: unknown[] }).errors ?? []) if (inner && typeof inner === "object") out.push(inner as { code?: unknown });
+  }
+  return out;
+}
+
+export function isDatabaseDown(err: unknown): boolean {
+  return causes(err).some((e) => (typeof e.code === "string" && (DB_DOWN_CODES.has(e.code) || e.code.startsWith("08")))
+    || (typeof e.message === "string" && DB_DOWN_MESSAGES.test(e.message)));
+}
+
 export function errorBody(err: unknown): { status: number; body: ErrorBody } {
   if (err instanceof AppError) {
     return { status: err.status, body: { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } } };
+  }
+  if (isDatabaseDown(err)) {
+    console.error("database unavailable:", (err as Error)?.message);
+    return { status: 503, body: { error: { code: "unavailable:database", message: "The database is not answering right now. Try again in a moment." } } };
   }
   console.error(err);
   return { status: 500, body: { error: { code: "internal", message: "Something went wrong on our side. Please try again." } } };
@@ -34,7 +58,7 @@ export function errorBody(err: unknown): { status: number; body: ErrorBody } {
 
 export function toErrorResponse(err: unknown): Response {
   const { status, body } = errorBody(err);
-  return Response.json(body, { status });
+  return Response.json(body, { status, headers: status === 503 ? { "retry-after": "5" } : undefined });
 }
 
 type Issue = { path: readonly PropertyKey[]; message: string; code?: string; errors?: readonly (readonly Issue[])[] };

@@ -1,5 +1,5 @@
 import "server-only";
-import { GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 
 let client: S3Client | undefined;
 
@@ -25,4 +25,8 @@ export async function putObject({ key, body, contentType }: { key: string; body:
 export async function getObjectBytes({ key }: { key: string }): Promise<Uint8Array> {
   const out = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
   return out.Body!.transformToByteArray();
+}
+
+export async function deleteObject({ key }: { key: string }) {
+  await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }

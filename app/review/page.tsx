@@ -4,7 +4,7 @@ import { listPendingSubmissions } from "@/db/queries/submissions";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { ReviewActions } from "@/components/review/review-actions";
 import { PageTitle } from "@/components/ui/card";
-import { getSessionUser, isModerator } from "@/lib/auth/session";
+import { allowed, getSessionUser } from "@/lib/auth/session";
 import { KIND_LABELS } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 
@@ -14,7 +14,7 @@ export const dynamic = "force-dynamic";
 export default async function ReviewPage() {
   const user = await getSessionUser();
   if (!user) redirect("/sign-in?next=/review");
-  if (!isModerator(user)) return <p className="text-muted">Only moderators review submissions.</p>;
+  if (!allowed(user, { part: "review" })) return <p className="text-muted">Only moderators review submissions.</p>;
   const pending = await listPendingSubmissions();
   return (
     <div className="max-w-5xl">

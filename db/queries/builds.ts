@@ -6,7 +6,8 @@ import { buildAudit, buildThreads, builds, user, type BuildRow } from "@/db/sche
 import { isModeratorRole, type BuildViewer } from "@/lib/builds/access";
 import { newBuildSlug } from "@/lib/builds/slug";
 import { AppError } from "@/lib/errors";
-import { MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
+import { UUID } from "@/lib/validation/ids";
+import { buildSlugSchema, MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
 
 export type NewBuild = Pick<BuildRow, "title" | "notes" | "visibility" | "request" | "solutionIndex" | "result" | "partIds" | "checkedCatalogVersion">;
 const endorser = alias(user, "endorser");
@@ -34,6 +35,7 @@ export async function insertBuild({ ownerId, values }: { ownerId: string; values
 
 /** One build with its owner's and endorser's names; 404 when the viewer may not see it. */
 export async function getBuildOrThrow({ slug, viewer }: { slug: string; viewer: BuildViewer }) {
+  if (!buildSlugSchema.safeParse(slug).success) throw new AppError("not_found:build", "No build at this link (it may be private, hidden or deleted).");
   const [row] = await db.select({ build: builds, ownerName: user.name, endorserName: endorser.name }).from(builds)
     .innerJoin(user, eq(user.id, builds.ownerId))
     .leftJoin(endorser, eq(endorser.id, builds.endorsedBy))
@@ -139,7 +141,7 @@ export async function listBuilds({ query, ownerId }: { query: ListBuildsQuery; o
   }
   if (query.cursor) {
     const [e, at, id] = Buffer.from(query.cursor, "base64url").toString("utf8").split(",");
-    if (!id || !/^[01]$/.test(e) || Number.isNaN(Date.parse(at))) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+    if (!id || !UUID.test(id) || !/^[01]$/.test(e) || !/^\d{4}-\d\d-\d\dT[\d:.]+Z$/.test(at ?? "") || Number.isNaN(Date.parse(at))) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
     where.push(sql`(${endorsedSql}, ${builds.createdAt}, ${builds.id}) < (${Number(e)}, ${at}::timestamptz, ${id})`);
   }
   const rows = await db.select(listColumns).from(builds).innerJoin(user, eq(user.id, builds.ownerId))

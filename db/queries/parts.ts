@@ -4,6 +4,8 @@ import { db } from "@/db/client";
 import { catalogState, parts } from "@/db/schema";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/validation/ids";
+import { hasNul } from "@/lib/validation/nul";
 import { decodeCursor, encodeCursor, type ListPartsQuery } from "@/lib/validation/catalog";
 
 function escapeLike(s: string) {
@@ -22,7 +24,11 @@ export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
         ilike(parts.frontInterface, like), ilike(parts.rearInterface, like))!);
     }
   }
-  if (query.cursor) where.push(gt(parts.slug, decodeCursor(query.cursor)));
+  if (query.cursor) {
+    const after = decodeCursor(query.cursor);
+    if (after === null) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+    where.push(gt(parts.slug, after));
+  }
   const rows = await db.select().from(parts).where(and(...where)).orderBy(asc(parts.slug)).limit(query.limit + 1);
   const page = rows.slice(0, query.limit);
   return {
@@ -38,8 +44,8 @@ export async function countApprovedParts() {
 
 /** By id or slug; pending and rejected parts only for their submitter or a moderator. */
 export async function getPartOrThrow({ ref, viewer }: { ref: string; viewer?: { id: string; moderator: boolean } | null }) {
-  const isUuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(ref);
-  const [row] = await db.select().from(parts).where(isUuid ? or(eq(parts.id, ref), eq(parts.slug, ref)) : eq(parts.slug, ref)).limit(1);
+  if (hasNul(ref) || ref.length > 200) throw new AppError("not_found:part", "No such part in the catalog.");
+  const [row] = await db.select().from(parts).where(isUuid(ref) ? or(eq(parts.id, ref), eq(parts.slug, ref)) : eq(parts.slug, ref)).limit(1);
   const visible = row && (row.status === "approved" || viewer?.moderator || (viewer && row.submittedBy === viewer.id));
   if (!row || !visible) throw new AppError("not_found:part", `No part "${ref}" in the catalog.`);
   return row;
@@ -48,7 +54,7 @@ export async function getPartOrThrow({ ref, viewer }: { ref: string; viewer?: { 
 /** Approved parts by ids or slugs, in one query. */
 export async function getApprovedPartsByRefs({ refs }: { refs: string[] }) {
   if (!refs.length) return [];
-  const ids = refs.filter((r) => /^[0-9a-f-]{36}$/i.test(r));
+  const ids = refs.filter(isUuid);
   const rows = await db.select().from(parts).where(and(eq(parts.status, "approved"),
     ids.length ? or(inArray(parts.slug, refs), inArray(parts.id, ids)) : inArray(parts.slug, refs)));
   return rows;

@@ -5,6 +5,7 @@ import { parts, user } from "@/db/schema";
 import { bumpCatalogVersion } from "./parts";
 import { partToRow } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
+import { isUuid } from "@/lib/validation/ids";
 import { slugify, type PartParsed } from "@/lib/validation/parts";
 
 async function uniqueSlug(base: string): Promise<string> {
@@ -40,6 +41,7 @@ export async function listSubmissionsBy({ userId }: { userId: string }) {
 }
 
 export async function getSubmissionOrThrow({ id }: { id: string }) {
+  if (!isUuid(id)) throw new AppError("not_found:submission", "No such submission.");
   const [row] = await db.select({ part: parts, submitterEmail: user.email, submitterName: user.name }).from(parts)
     .leftJoin(user, eq(user.id, parts.submittedBy)).where(eq(parts.id, id)).limit(1);
   if (!row) throw new AppError("not_found:submission", "No such submission.");
@@ -50,6 +52,7 @@ export async function getSubmissionOrThrow({ id }: { id: string }) {
 export async function reviewSubmission({ id, reviewerId, decision, reason }: {
   id: string; reviewerId: string; decision: "approve" | "reject"; reason?: string;
 }) {
+  if (!isUuid(id)) throw new AppError("not_found:submission", "No such submission.");
   return db.transaction(async (tx) => {
     const [row] = await tx.select().from(parts).where(eq(parts.id, id)).for("update");
     if (!row) throw new AppError("not_found:submission", "No such submission.");

@@ -1,34 +1,66 @@
+// The one role vocabulary: what each site role and shop role may do, as better-auth access
+// control statements. Every check in the app goes through `can` / `canInShop`; nothing compares
+// role names or ranks. The same objects configure better-auth's admin and organization plugins.
 import { createAccessControl } from "better-auth/plugins/access";
 import { defaultStatements as adminStatements, adminAc } from "better-auth/plugins/admin/access";
-import { defaultStatements as orgStatements, ownerAc } from "better-auth/plugins/organization/access";
 
-// Site roles: member (default), moderator, admin.
+// Site roles: member (default), moderator, admin. `user` and `session` are the admin plugin's
+// own statements (ban, set-role, list…); better-auth checks them on its /admin endpoints.
 export const siteStatements = {
   ...adminStatements,
-  build: ["save", "endorse", "hide", "attach-thread"],
+  build: ["save", "moderate", "delete-any"],
   part: ["submit", "review"],
 } as const;
 export const siteAc = createAccessControl(siteStatements);
 
 export const siteRoles = {
-  member: siteAc.newRole({ user: [], session: [], build: ["save"], part: ["submit"] }),
-  moderator: siteAc.newRole({ user: [], session: [], build: ["save", "endorse", "hide", "attach-thread"], part: ["submit", "review"] }),
-  admin: siteAc.newRole({ ...adminAc.statements, build: ["save", "endorse", "hide", "attach-thread"], part: ["submit", "review"] }),
+  member: siteAc.newRole({ build: ["save"], part: ["submit"] }),
+  moderator: siteAc.newRole({ build: ["save", "moderate"], part: ["submit", "review"] }),
+  admin: siteAc.newRole({ ...adminAc.statements, build: ["save", "moderate", "delete-any"], part: ["submit", "review"] }),
 };
 export type SiteRole = keyof typeof siteRoles;
 export const SITE_ROLES = Object.keys(siteRoles) as SiteRole[];
 
-/** Rank for "at least this role" checks. */
-export const ROLE_RANK: Record<SiteRole, number> = { member: 0, moderator: 1, admin: 2 };
+/** One permission: a resource and one of its actions, e.g. `{ build: "moderate" }`. */
+type OneOf<S> = { [K in keyof S]: { [P in K]: S[K] extends readonly (infer A)[] ? A : never } }[keyof S];
+export type SitePermission = OneOf<typeof siteStatements>;
 
+/** Unknown or missing roles read as member: a stray value never grants more. */
 export function roleOf(value: string | null | undefined): SiteRole {
-  return value === "admin" || value === "moderator" ? value : "member";
+  return value !== undefined && value !== null && Object.hasOwn(siteRoles, value) ? (value as SiteRole) : "member";
 }
 
-// Shop roles (better-auth organizations): owner and staff.
-export const shopStatements = { ...orgStatements, inventory: ["read", "update"], quote: ["answer"] } as const;
+function asRequest(permission: Record<string, string>): Record<string, string[]> {
+  return Object.fromEntries(Object.entries(permission).map(([k, v]) => [k, [v]]));
+}
+
+/** May a holder of this site role do this? */
+export function can(role: string | null | undefined, permission: SitePermission): boolean {
+  return siteRoles[roleOf(role)].authorize(asRequest(permission) as never).success;
+}
+
+// Shop roles (better-auth organizations): owner and staff. Teams and dynamic access control are
+// not enabled, so their statements are left out.
+export const shopStatements = {
+  organization: ["update", "delete"],
+  member: ["create", "update", "delete"],
+  invitation: ["create", "cancel"],
+  inventory: ["read", "update"],
+  quote: ["answer"],
+} as const;
 export const shopAc = createAccessControl(shopStatements);
 export const shopRoles = {
-  owner: shopAc.newRole({ ...ownerAc.statements, inventory: ["read", "update"], quote: ["answer"] }),
+  owner: shopAc.newRole({ ...shopStatements }),
   staff: shopAc.newRole({ inventory: ["read", "update"], quote: ["answer"] }),
 };
+export type ShopRole = keyof typeof shopRoles;
+export type ShopPermission = OneOf<typeof shopStatements>;
+
+/**
+ * May a member with this shop role do this? `role` is better-auth's `member.role` (it may list
+ * several, comma-separated); null means not a member of the shop.
+ */
+export function canInShop(role: string | null | undefined, permission: ShopPermission): boolean {
+  return (role ?? "").split(",").map((r) => r.trim()).some((r) =>
+    Object.hasOwn(shopRoles, r) && shopRoles[r as ShopRole].authorize(asRequest(permission) as never).success);
+}

@@ -2,8 +2,9 @@ import "server-only";
 import { headers } from "next/headers";
 import type { z } from "zod";
 import { AppError, fieldErrorsOf, toErrorResponse } from "@/lib/errors";
+import { findNul, NUL_MESSAGE } from "@/lib/validation/nul";
 import { getAuth } from "./index";
-import { ROLE_RANK, roleOf, type SiteRole } from "./roles";
+import { can, roleOf, type SitePermission, type SiteRole } from "./roles";
 
 export type SessionUser = { id: string; email: string; name: string; role: SiteRole; emailVerified: boolean };
 
@@ -15,18 +16,15 @@ export async function getSessionUser(requestHeaders?: Headers): Promise<SessionU
   return { id: u.id, email: u.email, name: u.name, role: roleOf(u.role), emailVerified: u.emailVerified };
 }
 
-export function hasRole(user: SessionUser | null, role: SiteRole): boolean {
-  return !!user && ROLE_RANK[user.role] >= ROLE_RANK[role];
+/** Is the user signed in and allowed this (see lib/auth/roles.ts)? */
+export function allowed(user: SessionUser | null, permission: SitePermission): boolean {
+  return !!user && can(user.role, permission);
 }
 
-export function isModerator(user: SessionUser | null): boolean {
-  return hasRole(user, "moderator");
-}
-
-/** Throws unless the user is signed in with at least `role`. */
-export function requireRole(user: SessionUser | null, role: SiteRole = "member"): SessionUser {
+/** Throws unless the user is signed in (and, when given, holds `permission`). */
+export function requireUser(user: SessionUser | null, permission?: SitePermission): SessionUser {
   if (!user) throw new AppError("unauthorized", "Sign in to do this.");
-  if (!hasRole(user, role)) throw new AppError("forbidden", `Only a ${role} can do this.`);
+  if (permission && !can(user.role, permission)) throw new AppError("forbidden", "Your account may not do this.");
   return user;
 }
 
@@ -39,19 +37,19 @@ type Handler<P, U> = (request: Request, ctx: { user: U; params: P }) => Promise<
  * (through getXOrThrow query helpers), never assumed from the URL.
  */
 export function withSession<P = Record<string, string>>(
-  handler: Handler<P, SessionUser>, opts?: { role?: SiteRole },
+  handler: Handler<P, SessionUser>, opts?: { permission?: SitePermission },
 ): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
 export function withSession<P = Record<string, string>>(
   handler: Handler<P, SessionUser | null>, opts: { anonymous: true },
 ): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
 export function withSession<P>(
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- narrowed by the overloads above
-  handler: Handler<P, any>, opts: { role?: SiteRole; anonymous?: boolean } = {},
+  handler: Handler<P, any>, opts: { permission?: SitePermission; anonymous?: boolean } = {},
 ) {
   return async (request: Request, ctx: RouteContext<P>) => {
     try {
       const user = await getSessionUser(request.headers);
-      if (!opts.anonymous) requireRole(user, opts.role ?? "member");
+      if (!opts.anonymous) requireUser(user, opts.permission);
       const params = (await ctx?.params) ?? ({} as P);
       return await handler(request, { user, params });
     } catch (err) {
@@ -66,11 +64,19 @@ export async function readJsonBody(request: Request, maxBytes = 8_000_000): Prom
   if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
   const text = await request.text();
   if (text.length > maxBytes) throw tooLarge();
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError("bad_request:json", "The request body is not valid JSON.");
   }
+  refuseNul(value);
+  return value;
+}
+
+function refuseNul(raw: unknown) {
+  const at = findNul(raw);
+  if (at) throw new AppError("bad_request:validation", "Some fields need attention.", { [at]: [NUL_MESSAGE] });
 }
 
 /** Parse a JSON body with a zod schema; 400 with field errors when it does not fit. */
@@ -79,6 +85,7 @@ export async function parseJsonBody<S extends z.ZodType>(request: Request, schem
 }
 
 export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.output<S> {
+  refuseNul(raw);
   const parsed = schema.safeParse(raw);
   if (!parsed.success) throw new AppError("bad_request:validation", "Some fields need attention.", fieldErrorsOf(parsed.error.issues));
   return parsed.data;
@@ -96,11 +103,11 @@ export type ActionState<T = unknown> =
 export function withAction<S extends z.ZodType, T>(
   schema: S,
   action: (input: z.output<S>, user: SessionUser) => Promise<T>,
-  opts: { role?: SiteRole } = {},
+  opts: { permission?: SitePermission } = {},
 ) {
   return async (input: unknown): Promise<ActionState<T>> => {
     try {
-      const user = requireRole(await getSessionUser(), opts.role ?? "member");
+      const user = requireUser(await getSessionUser(), opts.permission);
       const data = await action(parseWith(schema, input), user);
       return { ok: true, data };
     } catch (err) {

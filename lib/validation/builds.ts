@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { noNul } from "./nul";
 
 export const BUILD_VISIBILITIES = ["private", "unlisted", "public"] as const;
 export type BuildVisibility = (typeof BUILD_VISIBILITIES)[number];
@@ -52,7 +53,7 @@ const flag = z.enum(["1", "true", "0", "false", ""]).optional().transform((v) =>
 
 /** GET /api/v1/builds and the /builds page. */
 export const listBuildsQuerySchema = z.object({
-  q: z.string().trim().max(100, "At most 100 characters").optional(),
+  q: noNul(z.string().trim().max(100, "At most 100 characters")).optional(),
   reference: flag,
   mine: flag,
   limit: z.coerce.number({ message: "A whole number from 1 to 100" }).int("A whole number from 1 to 100")

@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { isKnownInterface } from "@/lib/interfaces";
+import { noNul } from "./nul";
 import { PART_KINDS } from "./parts";
 
 /** Query of GET /api/v1/parts. Everything arrives as strings; bad values are a 400. */
 export const listPartsQuerySchema = z.object({
-  q: z.string().trim().max(100, "At most 100 characters").optional(),
+  q: noNul(z.string().trim().max(100, "At most 100 characters")).optional(),
   kind: z.enum(PART_KINDS, { message: `One of: ${PART_KINDS.join(", ")}` }).optional(),
   interface: z.string().refine(isKnownInterface, "Unknown interface code").optional(),
   limit: z.coerce.number({ message: "A whole number from 1 to 200" }).int("A whole number from 1 to 200")
@@ -16,6 +17,8 @@ export type ListPartsQuery = z.infer<typeof listPartsQuerySchema>;
 export function encodeCursor(slug: string): string {
   return Buffer.from(slug, "utf8").toString("base64url");
 }
-export function decodeCursor(cursor: string): string {
-  return Buffer.from(cursor, "base64url").toString("utf8");
+/** The slug a cursor names, or null when it names none (slugs are lowercase letters, digits and dashes). */
+export function decodeCursor(cursor: string): string | null {
+  const slug = Buffer.from(cursor, "base64url").toString("utf8");
+  return /^[a-z0-9][a-z0-9-]{0,199}$/.test(slug) ? slug : null;
 }

@@ -12,7 +12,7 @@ import { SharePanel } from "@/components/builds/share-panel";
 import { TrainFigure } from "@/components/builds/train-figure";
 import { SafetyNote } from "@/components/safety-note";
 import { ButtonLink } from "@/components/ui/button";
-import { hasPublicPreview } from "@/lib/builds/access";
+import { canDeleteBuild, hasPublicPreview } from "@/lib/builds/access";
 import { chosenChain, shoppingList } from "@/lib/builds/chain";
 import { loadBuildForPage } from "@/lib/builds/load";
 import { planHrefOf } from "@/lib/builds/plan-href";
@@ -147,7 +147,7 @@ export default async function BuildPage({ params }: Props) {
               <h2 id="owner-heading" className="font-semibold text-ink">Your build</h2>
               <OwnerPanel slug={build.slug} title={build.title} notes={build.notes} visibility={build.visibility as BuildVisibility} />
             </section>
-          ) : viewer?.role === "admin" ? (
+          ) : canDeleteBuild(build, viewer) ? (
             <section aria-labelledby="admin-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
               <h2 id="admin-heading" className="font-semibold text-ink">Admin</h2>
               <OwnerPanel slug={build.slug} title={build.title} notes={build.notes} visibility={build.visibility as BuildVisibility} deleteOnly />

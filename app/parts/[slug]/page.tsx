@@ -8,7 +8,7 @@ import { getOwnedQuantity } from "@/db/queries/gear";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { SafetyNote } from "@/components/safety-note";
 import { ButtonLink } from "@/components/ui/button";
-import { getSessionUser, isModerator } from "@/lib/auth/session";
+import { allowed, getSessionUser } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { KIND_LABELS, formatGrams, formatPrice } from "@/lib/format";
@@ -34,7 +34,7 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
   const user = await getSessionUser();
   let row;
   try {
-    row = await getPartOrThrow({ ref: slug, viewer: user ? { id: user.id, moderator: isModerator(user) } : null });
+    row = await getPartOrThrow({ ref: slug, viewer: user ? { id: user.id, moderator: allowed(user, { part: "review" }) } : null });
   } catch (err) {
     if (err instanceof AppError && err.status === 404) notFound();
     throw err;
@@ -100,7 +100,7 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
           ))}
         </dl>
       </section>
-      {isModerator(user) ? <CorrectPartForm slug={p.slug} initial={{ lengthMm: p.lengthMm, adjustMm: p.adjustMm, clearApertureMm: p.clearApertureMm, weightG: p.weightG, listPriceCents: p.listPriceCents }} /> : null}
+      {allowed(user, { part: "review" }) ? <CorrectPartForm slug={p.slug} initial={{ lengthMm: p.lengthMm, adjustMm: p.adjustMm, clearApertureMm: p.clearApertureMm, weightG: p.weightG, listPriceCents: p.listPriceCents }} /> : null}
       {p.kind === "optics" ? <SafetyNote /> : null}
     </article>
   );

@@ -5,7 +5,7 @@ import { listReviewQueue } from "@/db/queries/builds";
 import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "@/components/builds/badges";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { PageTitle } from "@/components/ui/card";
-import { getSessionUser, isModerator } from "@/lib/auth/session";
+import { allowed, getSessionUser } from "@/lib/auth/session";
 import { siteOrigin } from "@/lib/builds/site-url";
 import { buildSummary, type BuildListRow } from "@/lib/builds/to-json";
 
@@ -38,7 +38,7 @@ function Row({ row, origin }: { row: BuildListRow; origin: string }) {
 export default async function ReviewBuildsPage() {
   const user = await getSessionUser();
   if (!user) redirect("/sign-in?next=/review/builds");
-  if (!isModerator(user)) return <p className="text-muted">Only moderators look after builds.</p>;
+  if (!allowed(user, { build: "moderate" })) return <p className="text-muted">Only moderators look after builds.</p>;
   const { flagged, recent } = await listReviewQueue({ limit: 50 });
   const origin = siteOrigin(await headers());
   return (

@@ -13,7 +13,7 @@ export const POST = withSession(async (request, { user }) => {
   const input = await parseJsonBody(request, createBuildSchema, 2_000_000);
   const slug = await saveBuild({ input, user });
   return Response.json({ slug, url: buildUrl(siteOrigin(request.headers), slug) }, { status: 201 });
-});
+}, { permission: { build: "save" } });
 
 export const GET = withSession(async (request, { user }) => {
   const query = parseWith(listBuildsQuerySchema, Object.fromEntries(new URL(request.url).searchParams));

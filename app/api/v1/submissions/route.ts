@@ -1,11 +1,11 @@
 // POST /api/v1/submissions — a member submits a missing part with its spec sheet (multipart)
 // GET  /api/v1/submissions — moderators: the pending queue; members: their own submissions
 import { createSubmission, listPendingSubmissions, listSubmissionsBy } from "@/db/queries/submissions";
-import { isModerator, parseWith, withSession } from "@/lib/auth/session";
+import { allowed, parseWith, withSession } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { checkSpecSheet, SPEC_SHEET_MAX_BYTES } from "@/lib/spec-sheet";
-import { putObject } from "@/lib/storage";
+import { deleteObject, putObject } from "@/lib/storage";
 import { partInputSchema } from "@/lib/validation/parts";
 
 export const dynamic = "force-dynamic";
@@ -26,12 +26,19 @@ export const POST = withSession(async (request, { user }) => {
   if (!checked.ok) throw new AppError("bad_request:validation", checked.message, { specSheet: [checked.message] });
   const key = `spec-sheets/${crypto.randomUUID()}.${checked.ext}`;
   await putObject({ key, body: bytes, contentType: checked.type });
-  const row = await createSubmission({ input, userId: user.id, specSheet: { key, type: checked.type } });
+  let row: Awaited<ReturnType<typeof createSubmission>>;
+  try {
+    row = await createSubmission({ input, userId: user.id, specSheet: { key, type: checked.type } });
+  } catch (err) {
+    // No orphan uploads: a submission that was not stored keeps no spec sheet either.
+    await deleteObject({ key }).catch((e) => console.error(`could not delete ${key}`, e));
+    throw err;
+  }
   return Response.json({ ...rowToApiPart(row), probableDuplicateOf: row.probableDuplicateOf }, { status: 201 });
 });
 
 export const GET = withSession(async (_request, { user }) => {
-  if (isModerator(user)) {
+  if (allowed(user, { part: "review" })) {
     const rows = await listPendingSubmissions();
     return Response.json({ items: rows.map((r) => ({ ...rowToApiPart(r.part), submitter: r.submitter, probableDuplicateOf: r.part.probableDuplicateOf, createdAt: r.part.createdAt })) });
   }

@@ -4,4 +4,4 @@ import { withSession } from "@/lib/auth/session";
 
 export const dynamic = "force-dynamic";
 
-export const GET = withSession(async () => Response.json({ items: await listUsers() }), { role: "admin" });
+export const GET = withSession(async () => Response.json({ items: await listUsers() }), { permission: { user: "list" } });

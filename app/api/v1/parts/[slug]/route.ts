@@ -1,7 +1,7 @@
 // GET   /api/v1/parts/:slug — one part by slug or id
 // PATCH /api/v1/parts/:slug — a moderator corrects a part; builds that use it re-check themselves
 import { getPartOrThrow, updatePart } from "@/db/queries/parts";
-import { isModerator, parseJsonBody, withSession } from "@/lib/auth/session";
+import { allowed, parseJsonBody, withSession } from "@/lib/auth/session";
 import { recheckBuildsForParts } from "@/lib/builds/recheck";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { partPatchSchema } from "@/lib/validation/submissions";
@@ -9,7 +9,7 @@ import { partPatchSchema } from "@/lib/validation/submissions";
 export const dynamic = "force-dynamic";
 
 export const GET = withSession<{ slug: string }>(async (_request, { user, params }) => {
-  const row = await getPartOrThrow({ ref: params.slug, viewer: user ? { id: user.id, moderator: isModerator(user) } : null });
+  const row = await getPartOrThrow({ ref: params.slug, viewer: user ? { id: user.id, moderator: allowed(user, { part: "review" }) } : null });
   return Response.json(rowToApiPart(row));
 }, { anonymous: true });
 
@@ -18,4 +18,4 @@ export const PATCH = withSession<{ slug: string }>(async (request, { params }) =
   const updated = await updatePart({ slug: params.slug, patch });
   const recheck = updated.status === "approved" ? await recheckBuildsForParts({ slugs: [updated.slug] }) : { checked: 0, noLongerFit: 0 };
   return Response.json({ ...rowToApiPart(updated), recheck });
-}, { role: "moderator" });
+}, { permission: { part: "review" } });

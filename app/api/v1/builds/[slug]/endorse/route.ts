@@ -10,7 +10,7 @@ function endorse(endorsed: boolean) {
     const { build } = await getBuildOrThrow({ slug: params.slug, viewer: toBuildViewer(user) });
     const endorsedAt = await setBuildEndorsed({ buildId: build.id, actorId: user.id, endorsed });
     return Response.json({ slug: build.slug, endorsed: !!endorsedAt, endorsedAt });
-  }, { role: "moderator" });
+  }, { permission: { build: "moderate" } });
 }
 
 export const POST = endorse(true);

@@ -12,10 +12,10 @@ export const POST = withSession<Params>(async (request, { user, params }) => {
   const { reason } = await parseJsonBody(request, hideBuildSchema, 10_000);
   await setBuildHidden({ buildId: build.id, actorId: user.id, reason });
   return Response.json({ slug: build.slug, hidden: true, hiddenReason: reason });
-}, { role: "moderator" });
+}, { permission: { build: "moderate" } });
 
 export const DELETE = withSession<Params>(async (_request, { user, params }) => {
   const { build } = await getBuildOrThrow({ slug: params.slug, viewer: toBuildViewer(user) });
   await setBuildHidden({ buildId: build.id, actorId: user.id, reason: null });
   return Response.json({ slug: build.slug, hidden: false, hiddenReason: null });
-}, { role: "moderator" });
+}, { permission: { build: "moderate" } });

@@ -12,11 +12,11 @@ export const POST = withSession<Params>(async (request, { user, params }) => {
   const { url } = await parseJsonBody(request, threadUrlSchema, 10_000);
   await addBuildThread({ buildId: build.id, actorId: user.id, url });
   return Response.json({ slug: build.slug, threads: await listBuildThreads({ buildId: build.id }) }, { status: 201 });
-}, { role: "moderator" });
+}, { permission: { build: "moderate" } });
 
 export const DELETE = withSession<Params>(async (request, { user, params }) => {
   const { build } = await getBuildOrThrow({ slug: params.slug, viewer: toBuildViewer(user) });
   const { url } = await parseJsonBody(request, threadUrlSchema, 10_000);
   await removeBuildThread({ buildId: build.id, actorId: user.id, url });
   return Response.json({ slug: build.slug, threads: await listBuildThreads({ buildId: build.id }) });
-}, { role: "moderator" });
+}, { permission: { build: "moderate" } });

@@ -21,4 +21,4 @@ export const POST = withSession<{ id: string }>(async (request, { user, params }
           text: `A moderator looked at ${name} and did not add it to the catalog.\n\nReason: ${reason}\n\nYou can submit it again with corrected numbers or a clearer spec sheet.` });
   }
   return Response.json(rowToApiPart(updated));
-}, { role: "moderator" });
+}, { permission: { part: "review" } });
