@@ -6,8 +6,7 @@ import { buildAudit, buildThreads, builds, user, type BuildRow } from "@/db/sche
 import { isModeratorRole, type BuildViewer } from "@/lib/builds/access";
 import { newBuildSlug } from "@/lib/builds/slug";
 import { AppError } from "@/lib/errors";
-import { UUID } from "@/lib/validation/ids";
-import { buildSlugSchema, MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
+import { buildSlugSchema, decodeBuildCursor, MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
 
 export type NewBuild = Pick<BuildRow, "title" | "notes" | "visibility" | "request" | "solutionIndex" | "result" | "partIds" | "checkedCatalogVersion">;
 const endorser = alias(user, "endorser");
@@ -140,9 +139,9 @@ export async function listBuilds({ query, ownerId }: { query: ListBuildsQuery; o
     where.push(or(ilike(builds.title, like), ilike(builds.notes, like), sql`array_to_string(${builds.partIds}, ' ') like ${slugLike}`));
   }
   if (query.cursor) {
-    const [e, at, id] = Buffer.from(query.cursor, "base64url").toString("utf8").split(",");
-    if (!id || !UUID.test(id) || !/^[01]$/.test(e) || !/^\d{4}-\d\d-\d\dT[\d:.]+Z$/.test(at ?? "") || Number.isNaN(Date.parse(at))) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
-    where.push(sql`(${endorsedSql}, ${builds.createdAt}, ${builds.id}) < (${Number(e)}, ${at}::timestamptz, ${id})`);
+    const c = decodeBuildCursor(query.cursor);
+    if (!c) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+    where.push(sql`(${endorsedSql}, ${builds.createdAt}, ${builds.id}) < (${c.endorsed}, ${c.at}::timestamptz, ${c.id})`);
   }
   const rows = await db.select(listColumns).from(builds).innerJoin(user, eq(user.id, builds.ownerId))
     .where(and(...where)).orderBy(desc(endorsedSql), desc(builds.createdAt), desc(builds.id)).limit(query.limit + 1);

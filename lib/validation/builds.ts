@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { UUID } from "./ids";
 import { noNul } from "./nul";
 
 export const BUILD_VISIBILITIES = ["private", "unlisted", "public"] as const;
@@ -58,8 +59,16 @@ export const listBuildsQuerySchema = z.object({
   mine: flag,
   limit: z.coerce.number({ message: "A whole number from 1 to 100" }).int("A whole number from 1 to 100")
     .min(1, "A whole number from 1 to 100").max(100, "A whole number from 1 to 100").default(24),
-  cursor: z.string().max(300).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API").optional(),
+  cursor: z.string().max(300).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API")
+    .refine((c) => c === "" || decodeBuildCursor(c) !== null, "Not a cursor from this API").optional(),
 });
+
+/** A builds-list cursor is "endorsed,createdAt,id" in base64url; null when it is not one of ours. */
+export function decodeBuildCursor(cursor: string): { endorsed: 0 | 1; at: string; id: string } | null {
+  const [e, at, id, extra] = Buffer.from(cursor, "base64url").toString("utf8").split(",");
+  if (extra !== undefined || !/^[01]$/.test(e ?? "") || !UUID.test(id ?? "") || !/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d{1,6})?Z$/.test(at ?? "") || Number.isNaN(Date.parse(at))) return null;
+  return { endorsed: Number(e) as 0 | 1, at, id };
+}
 export type ListBuildsQuery = z.infer<typeof listBuildsQuerySchema>;
 
 /** Build slugs: base-58 style, no look-alike characters. */

@@ -10,7 +10,8 @@ export const listPartsQuerySchema = z.object({
   interface: z.string().refine(isKnownInterface, "Unknown interface code").optional(),
   limit: z.coerce.number({ message: "A whole number from 1 to 200" }).int("A whole number from 1 to 200")
     .min(1, "A whole number from 1 to 200").max(200, "A whole number from 1 to 200").default(50),
-  cursor: z.string().max(200).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API").optional(),
+  cursor: z.string().max(300).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API")
+    .refine((c) => c === "" || decodeCursor(c) !== null, "Not a cursor from this API").optional(),
 });
 export type ListPartsQuery = z.infer<typeof listPartsQuerySchema>;
 
