@@ -1,5 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
+import { enqueueMail } from "@/lib/jobs/queue";
 
 let transporter: Transporter | undefined;
 
@@ -14,7 +15,13 @@ function getTransporter(): Transporter {
 
 export const MAIL_FROM = process.env.MAIL_FROM ?? "Trainyard <noreply@trainyard.test>";
 
+/** Queue a message: it is stored first and sent by the job worker, with retries (lib/jobs). */
 export async function sendMail(message: { to: string; subject: string; text: string; html?: string }) {
+  await enqueueMail(message);
+}
+
+/** Hand one message to the SMTP server now (the worker calls this; a failure is retried). */
+export async function deliverMail(message: { to: string; subject: string; text: string; html?: string }) {
   await getTransporter().sendMail({ from: MAIL_FROM, ...message });
 }
 

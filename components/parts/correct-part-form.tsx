@@ -32,7 +32,8 @@ export function CorrectPartForm({ slug, initial }: { slug: string; initial: Numb
       setMessage({ tone: "bad", text: body.error?.message ?? "The correction was not saved." });
       return;
     }
-    setMessage({ tone: "ok", text: `Saved. ${body.recheck.checked} build(s) re-checked; ${body.recheck.noLongerFit} no longer fit.` });
+    const n = body.recheck.queued as number;
+    setMessage({ tone: "ok", text: n ? `Saved. ${n} build${n === 1 ? "" : "s"} that use it are being re-checked; their pages show the verdict within seconds.` : "Saved. No saved build uses this part." });
     router.refresh();
   }
   if (!open) return <Button variant="secondary" onClick={() => setOpen(true)}>Correct the numbers</Button>;

@@ -175,3 +175,8 @@ export async function recordBuildCheck({ buildId, fits, reason, catalogVersion, 
     if (flipped) await audit(tx, buildId, null, "recheck", { fits, reason });
   });
 }
+
+export async function getBuildById({ id }: { id: string }) {
+  const [row] = await db.select().from(builds).where(eq(builds.id, id)).limit(1);
+  return row ?? null;
+}

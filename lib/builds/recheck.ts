@@ -5,6 +5,7 @@ import type { BuildRow, PartRow } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
 import { rowToSolverPart } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
+import { enqueueRechecks } from "@/lib/jobs/queue";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import { runPlan, type PlanInput } from "@/lib/planner/run-plan";
 import type { Chain, Part } from "@/lib/solver/types";
@@ -110,26 +111,21 @@ async function alternativeHint(build: BuildRow): Promise<string> {
 }
 
 /**
- * Re-solve every build that uses any of these catalog parts, store the verdict, and audit
- * the builds whose verdict flipped. Called after a catalog part changes.
+ * Re-solve one build against today's catalog, store the verdict, and audit it when it flipped.
+ * Run by the job worker; an error is thrown so the queue retries it.
  */
-export async function recheckBuildsForParts({ slugs }: { slugs: string[] }): Promise<{ checked: number; noLongerFit: number }> {
+export async function recheckBuild(build: BuildRow): Promise<Verdict> {
+  const verdict = await checkBuild(build);
+  if (!verdict.fits) verdict.reason += await alternativeHint(build);
+  await recordBuildCheck({
+    buildId: build.id, fits: verdict.fits, reason: verdict.reason,
+    catalogVersion: verdict.catalogVersion ?? build.checkedCatalogVersion, flipped: verdict.fits !== build.fits,
+  });
+  return verdict;
+}
+
+/** After a catalog part changes: queue a durable re-check of every build that uses it. */
+export async function recheckBuildsForParts({ slugs }: { slugs: string[] }): Promise<{ queued: number }> {
   const list = await listBuildsUsingParts({ slugs: [...new Set(slugs)] });
-  let noLongerFit = 0;
-  for (const build of list) {
-    let verdict: Verdict;
-    try {
-      verdict = await checkBuild(build);
-      if (!verdict.fits) verdict.reason += await alternativeHint(build);
-    } catch (err) {
-      console.error(`re-check of build ${build.slug} failed`, err);
-      continue;
-    }
-    if (!verdict.fits) noLongerFit += 1;
-    await recordBuildCheck({
-      buildId: build.id, fits: verdict.fits, reason: verdict.reason,
-      catalogVersion: verdict.catalogVersion ?? build.checkedCatalogVersion, flipped: verdict.fits !== build.fits,
-    });
-  }
-  return { checked: list.length, noLongerFit };
+  return { queued: await enqueueRechecks(list.map((b) => b.id)) };
 }

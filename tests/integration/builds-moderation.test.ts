@@ -121,6 +121,16 @@ describe("listing", () => {
   });
 });
 
+/** Poll until `done` holds (the job worker answers within a second or two). */
+async function eventually<T>(read: () => Promise<T>, done: (v: T) => boolean, timeoutMs = 20_000): Promise<T> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const v = await read();
+    if (done(v) || Date.now() > deadline) return v;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+}
+
 describe("re-check when a catalog part changes", () => {
   it("flags an endorsed build that no longer fits, says why, and recovers when the part is restored", async () => {
     const slug = await saveBuild(v.owner, "public");
@@ -132,7 +142,9 @@ describe("re-check when a catalog part changes", () => {
     try {
       const edit = await v.moderator.patch(`/api/v1/parts/${spacer}`, { lengthMm: part.lengthMm + 6 });
       expect(edit.status).toBe(200);
-      const after = await getJson(v.anon, slug);
+      expect((await edit.json()).recheck.queued).toBeGreaterThan(0);
+      // The re-check runs on the job queue: wait for the worker's verdict.
+      const after = await eventually(() => getJson(v.anon, slug), (b) => b.fits === false);
       expect(after.fits).toBe(false);
       expect(after.checkReason).toMatch(/now lands at [\d.]+ mm, outside/);
       expect(after.checkReason).toContain(part.name);
@@ -148,7 +160,7 @@ describe("re-check when a catalog part changes", () => {
     } finally {
       await v.moderator.patch(`/api/v1/parts/${spacer}`, { lengthMm: part.lengthMm });
     }
-    const restored = await getJson(v.anon, slug);
+    const restored = await eventually(() => getJson(v.anon, slug), (b) => b.fits === true);
     expect(restored.fits).toBe(true);
     const { audit } = await getJson(v.moderator, slug);
     expect(audit.slice(0, 2).map((a: { action: string; detail: { fits: boolean } }) => [a.action, a.detail.fits])).toEqual([["recheck", true], ["recheck", false]]);

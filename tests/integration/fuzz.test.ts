@@ -19,16 +19,18 @@ async function send(client: Client, path: string, init: RequestInit & { json?: u
 
 /** The contract every answer keeps. */
 async function checkAnswer(res: Response, what: string) {
-  expect(res.status, `${what} → ${res.status}`).toBeLessThan(500);
+  expect(res.status, `${what.slice(0, 300)} → ${res.status}`).toBeLessThan(500);
   if (res.status < 400) return;
+  // Node's HTTP parser refuses oversized request lines/headers before the app sees them.
+  if (res.status === 431 || res.status === 414) return;
   const type = res.headers.get("content-type") ?? "";
   // Pages answer 404 in HTML; every API error is JSON.
   if (!type.includes("application/json")) {
-    expect(what, `${what}: a non-JSON error`).not.toMatch(/ \/api\//);
+    expect(what.includes(" /api/"), `${what.slice(0, 120)}: a non-JSON ${res.status} (${type})`).toBe(false);
     return;
   }
   const text = await res.text();
-  expect(text, `${what} leaked internals`).not.toMatch(LEAK);
+  expect(LEAK.test(text), `${what.slice(0, 200)} leaked internals: ${text.slice(0, 300)}`).toBe(false);
   const body = JSON.parse(text) as { error?: { code?: unknown; message?: unknown; fields?: unknown } };
   expect(Object.keys(body)).toEqual(["error"]);
   expect(typeof body.error?.code).toBe("string");
@@ -121,7 +123,7 @@ describe("fuzzed query strings", () => {
 describe("fuzzed paths", () => {
   it("ids and slugs in API paths and pages", () => prop(fc.asyncProperty(
     fc.constantFrom("/api/v1/builds/", "/api/v1/parts/", "/b/", "/parts/", "/api/v1/submissions/"), pathSegment,
-    fc.constantFrom("", "/spec-sheet", "/review", "/endorse", "/opengraph-image"), async (prefix, seg, suffix) => {
+    fc.constantFrom("", "/spec-sheet", "/opengraph-image"), async (prefix, seg, suffix) => {
       const path = `${prefix}${seg}${prefix === "/api/v1/submissions/" ? suffix || "/spec-sheet" : prefix === "/b/" && suffix === "/opengraph-image" ? suffix : ""}`;
       const res = await send(prefix.startsWith("/api/v1/submissions") ? moderator : member, path);
       await checkAnswer(res, `GET ${path.slice(0, 200)}`);

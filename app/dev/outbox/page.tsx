@@ -1,5 +1,7 @@
 import { notFound } from "next/navigation";
+import { listPendingMail } from "@/db/queries/jobs";
 import { listOutboxMessages } from "@/db/queries/outbox";
+import { PendingMailList } from "@/components/outbox/pending-mail";
 import { PageTitle } from "@/components/ui/card";
 import { isMailFake } from "@/lib/mail";
 
@@ -13,10 +15,12 @@ function linkify(text: string) {
 
 export default async function OutboxPage() {
   if (!isMailFake()) notFound();
-  const messages = await listOutboxMessages({ limit: 100 });
+  const [messages, pending] = await Promise.all([listOutboxMessages({ limit: 100 }), listPendingMail()]);
   return (
     <div className="max-w-4xl">
       <PageTitle title="Local outbox" lead="Mail sent by this copy of Trainyard stays here instead of leaving the machine. Newest first." />
+      <PendingMailList items={pending} />
+      <h2 className="mb-3 font-semibold text-ink">Sent <span className="num text-muted">({messages.length})</span></h2>
       {messages.length === 0 ? <p className="text-muted">No messages yet.</p> : (
         <ol className="space-y-3">
           {messages.map((m, i) => (

@@ -237,6 +237,8 @@ export const MATRIX: Row[] = [
   row("GET", "/api/v1/admin/users", () => "/api/v1/admin/users", { _: 403, anon: 401, banned: 401, admin: 200 }),
   // Today's behaviour; issue 16 item 1 (sec) restricts it to admins: change this one line at merge.
   row("GET", "/api/dev/outbox", () => "/api/dev/outbox", ANYONE),
+  // ── unknown API addresses: a JSON 404 for everyone ───────────────────────────────────────────
+  ...(["GET", "POST", "PUT", "PATCH", "DELETE"] as const).map((m) => row(m, "/api/[...path]", () => "/api/v1/no-such-route", { _: 404 })),
   // ── pages that show private data ───────────────────────────────────────────────────────────
   row("PAGE", "/account", () => "/account", PAGE_SIGNED_IN, { effect: async ({ res, f, actor, allowed }) => {
     if (!allowed) return;

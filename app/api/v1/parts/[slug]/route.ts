@@ -16,6 +16,6 @@ export const GET = withSession<{ slug: string }>(async (_request, { user, params
 export const PATCH = withSession<{ slug: string }>(async (request, { params }) => {
   const patch = await parseJsonBody(request, partPatchSchema);
   const updated = await updatePart({ slug: params.slug, patch });
-  const recheck = updated.status === "approved" ? await recheckBuildsForParts({ slugs: [updated.slug] }) : { checked: 0, noLongerFit: 0 };
+  const recheck = updated.status === "approved" ? await recheckBuildsForParts({ slugs: [updated.slug] }) : { queued: 0 };
   return Response.json({ ...rowToApiPart(updated), recheck });
 }, { permission: { part: "review" } });

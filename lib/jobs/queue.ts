@@ -1,0 +1,48 @@
+import "server-only";
+// The durable job queue (pg-boss, in the app's own PostgreSQL): e-mails and build re-checks are
+// stored as jobs first and done by the worker (lib/jobs/worker.ts), with retries, so a mail
+// server that is down loses nothing and a crash in the middle of a re-check resumes.
+import PgBoss from "pg-boss";
+
+export const QUEUES = {
+  /** One message; retried with backoff for about a day before it counts as failed. */
+  mail: { name: "mail", retryLimit: 25, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
+  /** One build re-solved against today's catalog; at most one waiting per build. */
+  recheck: { name: "build-recheck", policy: "short", retryLimit: 10, retryDelay: 5, retryBackoff: true, expireInSeconds: 120 },
+} as const satisfies Record<string, PgBoss.Queue>;
+
+const globalForBoss = globalThis as unknown as { trainyardBoss?: Promise<PgBoss> };
+
+async function startBoss(): Promise<PgBoss> {
+  const connectionString = process.env.DATABASE_URL;
+  if (!connectionString) throw new Error("DATABASE_URL is not set");
+  const boss = new PgBoss({ connectionString, max: 4, application_name: "trainyard-jobs" });
+  boss.on("error", (err) => console.error("job queue:", err.message));
+  await boss.start();
+  for (const q of Object.values(QUEUES)) await boss.createQueue(q.name, q);
+  return boss;
+}
+
+/** The started queue, shared by the process. A failed start (database down) is retried on next use. */
+export function getBoss(): Promise<PgBoss> {
+  globalForBoss.trainyardBoss ??= startBoss().catch((err) => {
+    globalForBoss.trainyardBoss = undefined;
+    throw err;
+  });
+  return globalForBoss.trainyardBoss;
+}
+
+export type MailJob = { to: string; subject: string; text: string; html?: string };
+
+export async function enqueueMail(message: MailJob): Promise<void> {
+  const boss = await getBoss();
+  await boss.send(QUEUES.mail.name, message);
+}
+
+/** Queue a re-check of each build; a build already waiting is not queued twice. */
+export async function enqueueRechecks(buildIds: string[]): Promise<number> {
+  if (!buildIds.length) return 0;
+  const boss = await getBoss();
+  await boss.insert(buildIds.map((buildId) => ({ name: QUEUES.recheck.name, data: { buildId }, singletonKey: buildId })));
+  return buildIds.length;
+}
