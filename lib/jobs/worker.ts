@@ -9,14 +9,30 @@ import { getBoss, QUEUES, type MailJob } from "./queue";
 
 const globalForWorker = globalThis as unknown as { trainyardWorker?: boolean };
 
-async function startOnce() {
+/**
+ * Work a queue in batches (pg-boss waits a polling interval between fetches, so one job per
+ * fetch would cap it at two a second). Each job succeeds or fails on its own: a failed one is
+ * handed back for a retry, the rest of the batch completes.
+ */
+async function workEach<T extends object>(name: string, run: (data: T) => Promise<void>) {
   const boss = await getBoss();
   // Poll twice a second: mail links should arrive while the person is still looking.
-  await boss.work<MailJob>(QUEUES.mail.name, { pollingIntervalSeconds: 0.5 }, async ([job]) => {
-    await deliverMail(job.data);
+  await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 20 }, async (jobs) => {
+    for (const job of jobs) {
+      try {
+        await run(job.data);
+      } catch (err) {
+        console.error(`[jobs] ${name} ${job.id} failed, will retry: ${(err as Error).message}`);
+        await boss.fail(name, job.id, { message: (err as Error).message });
+      }
+    }
   });
-  await boss.work<{ buildId: string }>(QUEUES.recheck.name, { pollingIntervalSeconds: 0.5 }, async ([job]) => {
-    const build = await getBuildById({ id: job.data.buildId });
+}
+
+async function startOnce() {
+  await workEach<MailJob>(QUEUES.mail.name, deliverMail);
+  await workEach<{ buildId: string }>(QUEUES.recheck.name, async ({ buildId }) => {
+    const build = await getBuildById({ id: buildId });
     if (build) await recheckBuild(build);
   });
 }

@@ -1,7 +1,8 @@
 // POST /api/v1/solve — solve a train (inline parts, or catalog references resolved here)
 import { readJsonBody, withSession } from "@/lib/auth/session";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
-import { runPlan, type PlanInput } from "@/lib/planner/run-plan";
+import { planJson } from "@/lib/planner/plan-cache";
+import type { PlanInput } from "@/lib/planner/run-plan";
 import { parsePlanRequest } from "@/lib/validation/plan";
 
 export const dynamic = "force-dynamic";
@@ -14,5 +15,5 @@ export const POST = withSession(async (request, { user }) => {
     throw new AppError(tooLarge ? "payload_too_large" : "bad_request:validation", tooLarge ? "Too many parts or stations in one request." : "Some fields need attention.", fieldErrorsOf(parsed.issues));
   }
   const input = parsed.data as PlanInput;
-  return Response.json(await runPlan({ input, viewer: user }));
+  return new Response(await planJson({ input, viewer: user }), { headers: { "content-type": "application/json" } });
 }, { anonymous: true });
