@@ -8,7 +8,7 @@ export const QUEUES = {
   /** One message; retried with backoff for about a day before it counts as failed. */
   mail: { name: "mail", retryLimit: 25, retryDelay: 5, retryBackoff: true, expireInSeconds: 60 },
   /** One build re-solved against today's catalog; at most one waiting per build. */
-  recheck: { name: "build-recheck", policy: "short", retryLimit: 10, retryDelay: 5, retryBackoff: true, expireInSeconds: 120 },
+  recheck: { name: "build-recheck", policy: "short", retryLimit: 10, retryDelay: 5, retryBackoff: true, expireInSeconds: 30 },
 } as const satisfies Record<string, PgBoss.Queue>;
 
 const globalForBoss = globalThis as unknown as { trainyardBoss?: Promise<PgBoss> };
@@ -16,7 +16,9 @@ const globalForBoss = globalThis as unknown as { trainyardBoss?: Promise<PgBoss>
 async function startBoss(): Promise<PgBoss> {
   const connectionString = process.env.DATABASE_URL;
   if (!connectionString) throw new Error("DATABASE_URL is not set");
-  const boss = new PgBoss({ connectionString, max: 4, application_name: "trainyard-jobs" });
+  // Maintenance every 10 s: a job held by a process that died is handed out again soon after
+  // its expiry (30–60 s), not minutes later.
+  const boss = new PgBoss({ connectionString, max: 4, application_name: "trainyard-jobs", maintenanceIntervalSeconds: 10 });
   boss.on("error", (err) => console.error("job queue:", err.message));
   await boss.start();
   for (const q of Object.values(QUEUES)) await boss.createQueue(q.name, q);

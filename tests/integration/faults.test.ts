@@ -37,6 +37,7 @@ let appPort: number;
 let base: string;
 let env: NodeJS.ProcessEnv;
 let stopMail: () => Promise<void>;
+let mailPort: number;
 let cookie = "";
 let appLog = "";
 
@@ -75,7 +76,9 @@ async function save(title: string): Promise<Outcome> {
       signal: AbortSignal.timeout(15_000),
     });
     const body = (await res.json().catch(() => null)) as { slug?: string; error?: { code: string; message: string } } | null;
-    return { title, status: res.status, slug: body?.slug, code: body?.error?.code, ms: Date.now() - t0 };
+    // A 201 whose body never arrived (the server died mid-answer) is not an acknowledgement.
+    if (!body) return { title, status: 0, failed: "cut off", ms: Date.now() - t0 };
+    return { title, status: res.status, slug: body.slug, code: body.error?.code, ms: Date.now() - t0 };
   } catch (err) {
     return { title, status: 0, failed: (err as Error).name, ms: Date.now() - t0 };
   }
@@ -101,7 +104,8 @@ beforeAll(async () => {
   await ensureDatabase(server.url("postgres"), DATABASE, { fresh: true });
   await migrateDatabase(server.url(DATABASE));
   await seedDemo(server.url(DATABASE), () => {});
-  const mail = await startMailFake({ port: await freePort(), databaseUrl: server.url(DATABASE) });
+  mailPort = await freePort();
+  const mail = await startMailFake({ port: mailPort, databaseUrl: server.url(DATABASE) });
   stopMail = mail.stop;
   appPort = await freePort();
   base = `http://127.0.0.1:${appPort}`;
@@ -196,4 +200,61 @@ describe("the server is killed mid-write", () => {
     const res = await fetch(`${base}/api/v1/builds/${acknowledged[0].slug}`, { headers: { cookie } });
     expect(res.status).toBe(200);
   }, 180_000);
+});
+
+async function query<T>(text: string, values: unknown[] = []): Promise<T[]> {
+  const client = new pg.Client({ connectionString: server.url(DATABASE) });
+  await client.connect();
+  try { return (await client.query(text, values)).rows as T[]; } finally { await client.end(); }
+}
+
+async function until(what: string, check: () => Promise<boolean>, timeoutMs: number) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (await check()) return;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error(`timed out waiting for ${what}`);
+}
+
+describe("durable side effects", () => {
+  it("keeps a message while the mail server is down and delivers it when it is back", async () => {
+    await stopMail();
+    const email = "moderator@trainyard.test";
+    const res = await fetch(`${base}/api/auth/request-password-reset`, {
+      method: "POST", headers: { "content-type": "application/json", origin: base }, body: JSON.stringify({ email, redirectTo: "/reset-password" }),
+    });
+    expect(res.status).toBe(200);
+    const outbox = async () => (await (await fetch(`${base}/api/dev/outbox?to=moderator`)).json()) as { messages: { subject: string }[]; pending: { subject: string; state: string; retryCount: number }[] };
+    // The worker tries, fails (nothing listens), and keeps the job for a retry.
+    await until("a failed delivery attempt", async () => (await outbox()).pending.some((p) => p.retryCount > 0), 20_000);
+    expect((await outbox()).messages.some((m) => /reset/i.test(m.subject))).toBe(false);
+    const mail = await startMailFake({ port: mailPort, databaseUrl: server.url(DATABASE) });
+    stopMail = mail.stop;
+    await until("the retried delivery", async () => (await outbox()).messages.some((m) => /reset/i.test(m.subject)), 60_000);
+    expect((await outbox()).pending).toEqual([]);
+  }, 120_000);
+
+  it("finishes a catalog re-check that a crash interrupted", async () => {
+    const [{ slug }] = await query<{ slug: string }>("select unnest(part_ids) as slug from builds where title like $1 limit 1", [`${TITLE}%`]);
+    const users = await query<{ count: string }>("select count(*) from builds where $1 = any(part_ids)", [slug]);
+    const using = Number(users[0].count);
+    expect(using).toBeGreaterThan(5);
+    const mod = await fetch(`${base}/api/auth/sign-in/email`, {
+      method: "POST", headers: { "content-type": "application/json", origin: base },
+      body: JSON.stringify({ email: "moderator@trainyard.test", password: process.env.DEMO_PASSWORD ?? "trainyard-demo" }),
+    });
+    const modCookie = mod.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+    const [{ now }] = await query<{ now: Date }>("select now()");
+    const patch = await fetch(`${base}/api/v1/parts/${slug}`, {
+      method: "PATCH", headers: { "content-type": "application/json", origin: base, cookie: modCookie }, body: JSON.stringify({ description: `Re-measured ${Date.now()}` }),
+    });
+    expect(patch.status).toBe(200);
+    expect((await patch.json()).recheck.queued).toBe(using);
+    await killApp("SIGKILL");
+    const checked = async () => Number((await query<{ count: string }>("select count(*) from builds where $1 = any(part_ids) and checked_at > $2", [slug, now]))[0].count);
+    expect(await checked(), "the crash interrupted the re-check").toBeLessThan(using);
+    await startApp();
+    await until("every build re-checked after the restart", async () => (await checked()) === using, 120_000);
+  }, 200_000);
 });
