@@ -18,5 +18,6 @@ export function proxy(request: NextRequest) {
   return NextResponse.next();
 }
 
-// Everything but static assets: the encoding check applies to every route.
-export const config = { matcher: ["/((?!_next/static|_next/image|favicon.ico).*)"] };
+// The account pages, and any address holding a percent sign (the only ones that can be badly
+// encoded): the hot API routes skip the proxy entirely.
+export const config = { matcher: ["/account/:path*", "/review/:path*", "/parts/submit", "/((?!_next/).*%.*)"] };
