@@ -27,7 +27,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
   }
   const { shop, role, shops } = ctx;
   return (
-    <div className="grid gap-6 lg:grid-cols-[220px_minmax(0,1fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[220px_minmax(0,1fr)]">
       <aside className="space-y-4">
         <div className="rounded-lg border border-line bg-surface p-4">
           <p className="text-[11px] font-medium uppercase tracking-[0.2em] text-brass-ink">Your shop</p>

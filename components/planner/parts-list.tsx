@@ -50,7 +50,7 @@ export function PartsList({ train, unit, owned, currency }: { train: Train; unit
             </tbody>
             <tfoot className="num">
               <tr>
-                <th scope="row" className="pt-2 text-left font-semibold text-ink">Total at list prices{unknown ? ` (${unknown} unpriced)` : ""}</th>
+                <th scope="row" className="pt-2 text-left font-semibold text-ink">Total at {currency ? "the shop's prices" : "list prices"}{unknown ? ` (${unknown} unpriced)` : ""}</th>
                 <td className="pt-2 text-right font-semibold text-ink">{known.length ? price(total) : "—"}</td>
               </tr>
             </tfoot>
@@ -63,7 +63,7 @@ export function PartsList({ train, unit, owned, currency }: { train: Train; unit
           <ul className="space-y-1 text-sm">
             {own.map((l) => <li key={l.id} className="flex justify-between gap-2 border-b border-line/70 py-1.5"><span>{l.count > 1 ? `${l.count} × ` : ""}{l.name}</span><span className="num text-muted">{formatLength(l.lengthMm, unit)}</span></li>)}
           </ul>
-        ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
+        ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : currency ? "Drawing from the shop’s stock only. Tick “Count what I own first” to use your own parts too." : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
       </div>
     </div>
   );

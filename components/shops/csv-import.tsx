@@ -60,10 +60,10 @@ export function CsvImport({ shopSlug }: { shopSlug: string }) {
               <h2 id="preview-title" className="text-lg font-semibold text-ink">Preview: nothing is written yet</h2>
               <p className="text-sm text-muted"><span className="num font-medium text-ok">{preview.okCount} ready</span>{preview.errorCount ? <> · <span className="num font-medium text-bad">{preview.errorCount} to fix</span>: fix them in the file and upload it again. A file with any wrong row imports nothing.</> : " · every row matched a catalog part."}</p>
             </div>
-            <Button disabled={busy || preview.errorCount > 0 || !file} onClick={() => file && send(file, true)}>Import {preview.okCount} line{preview.okCount === 1 ? "" : "s"}</Button>
+            <Button disabled={busy || preview.errorCount > 0 || !file} onClick={() => file && send(file, true)}>{preview.errorCount ? `Fix ${preview.errorCount} row${preview.errorCount === 1 ? "" : "s"} to import` : `Import ${preview.okCount} line${preview.okCount === 1 ? "" : "s"}`}</Button>
           </div>
           <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-            <table className="w-full text-sm">
+            <table className="w-full min-w-[44rem] text-sm">
               <caption className="sr-only">Rows of the file, matched to catalog parts</caption>
               <thead className="border-b border-line bg-sunken text-left text-xs uppercase tracking-wide text-muted">
                 <tr><th className="px-3 py-2">Line</th><th className="px-3 py-2">Catalog part</th><th className="px-3 py-2">SKU</th><th className="px-3 py-2 text-right">Price</th><th className="px-3 py-2 text-right">On hand</th><th className="px-3 py-2">Result</th></tr>
@@ -73,7 +73,7 @@ export function CsvImport({ shopSlug }: { shopSlug: string }) {
                   <tr key={r.line} className={`border-b border-line/60 align-top last:border-0 ${r.errors.length ? "bg-bad/5" : ""}`}>
                     <td className="num px-3 py-2 text-muted">{r.line}</td>
                     <td className="px-3 py-2">{r.part ? <Link href={`/parts/${r.part.slug}`} className="text-ink hover:underline">{r.part.name}</Link> : <span className="text-muted">not matched</span>}</td>
-                    <td className="code px-3 py-2">{r.sku || "—"}</td>
+                    <td className="code whitespace-nowrap px-3 py-2">{r.sku || "—"}</td>
                     <td className="num px-3 py-2 text-right">{r.priceCents !== null && r.currency.length === 3 ? (() => { try { return formatMoney(r.priceCents, r.currency); } catch { return r.priceCents; } })() : "—"}</td>
                     <td className="num px-3 py-2 text-right">{r.onHand ?? "—"}</td>
                     <td className="px-3 py-2">{r.errors.length ? <ul className="space-y-0.5 text-bad">{r.errors.map((e) => <li key={e}>{e}</li>)}</ul> : <span className="rounded bg-ok/10 px-1.5 py-0.5 text-xs font-medium text-ok">{r.action === "add" ? "new line" : "update"}</span>}</td>

@@ -144,16 +144,19 @@ export function InventoryTable({ shopSlug, currency, initial }: { shopSlug: stri
   const pending = dirty.length + removed.length;
   return (
     <div className="space-y-4">
-      <div className="grid gap-3 rounded-lg border border-line bg-surface p-4 md:grid-cols-[1fr_auto] md:items-end">
+      <div className="grid gap-3 rounded-lg border border-line bg-surface p-4 md:grid-cols-[1fr_auto] md:items-start">
+        <div>
+        <p aria-hidden className="mb-1.5 text-sm font-medium text-text">Add a catalog part</p>
         <PartCombobox label="Add a catalog part" kinds={["adapter", "spacer", "extension"]} placeholder="Search spacers, adapters, extensions…"
           onPick={addLine} hint="It joins the table as a new line: give it your SKU, price and stock, then save." />
+        </div>
         <label className="text-sm">
           <span className="mb-1.5 block font-medium text-text">Find a line</span>
           <input className="w-full rounded-md border border-line bg-bg px-3 py-2 text-sm md:w-56" value={filter} onChange={(e) => setFilter(e.target.value)} placeholder="Name, SKU…" />
         </label>
       </div>
       <div className="sticky top-0 z-10 flex flex-wrap items-center justify-between gap-3 rounded-lg border border-line bg-bg/95 px-4 py-2 backdrop-blur">
-        <p className="text-sm text-muted" role="status">{pending ? `${pending} unsaved change${pending === 1 ? "" : "s"}` : `${rows.length} lines · prices in the smallest unit are shown in ${currency}`}</p>
+        <p className="text-sm text-muted" role="status">{pending ? `${pending} unsaved change${pending === 1 ? "" : "s"}` : `${rows.length} lines · your prices in ${currency}`}</p>
         <div className="flex gap-2">
           <Button variant="secondary" disabled={!pending || saving} onClick={reset}>Undo changes</Button>
           <Button disabled={!pending || saving} onClick={save}>{saving ? "Saving…" : "Save changes"}</Button>
@@ -161,7 +164,7 @@ export function InventoryTable({ shopSlug, currency, initial }: { shopSlug: stri
       </div>
       {message ? <FormMessage tone={message.tone}>{message.text}</FormMessage> : null}
       <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-        <table className="w-full text-sm">
+        <table className="w-full min-w-[52rem] text-sm">
           <caption className="sr-only">Stock lines of the shop</caption>
           <thead className="border-b border-line bg-sunken text-left text-xs uppercase tracking-wide text-muted">
             {table.getHeaderGroups().map((g) => (
@@ -179,7 +182,7 @@ export function InventoryTable({ shopSlug, currency, initial }: { shopSlug: stri
           </thead>
           <tbody>
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className={`border-b border-line/60 align-top last:border-0 ${changed(row.original) ? "bg-brass/5" : ""}`}>
+              <tr key={row.id} className={`border-b border-line/60 align-middle last:border-0 ${changed(row.original) ? "bg-brass/5" : ""}`}>
                 {row.getVisibleCells().map((c) => <td key={c.id} className="px-3 py-1.5">{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}
               </tr>
             ))}

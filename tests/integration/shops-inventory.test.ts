@@ -92,7 +92,7 @@ describe("CSV import", () => {
 
   it("refuses a 10 MB junk file, wrong columns and hostile content, changing nothing", async () => {
     const before = await inventoryOf(owner, shop.slug);
-    const junk = new Uint8Array(10 * 1024 * 1024).map((_, i) => (i * 7919) % 251);
+    const junk = new Uint8Array(new ArrayBuffer(10 * 1024 * 1024)).map((_, i) => (i * 7919) % 251);
     const big = await postCsv(owner, shop.slug, junk, true);
     expect(big.status).toBe(413);
     expect((await big.json()).error.message).toMatch(/5 MB/);

@@ -28,7 +28,7 @@ export async function newShop(tag: string) {
 export const put = (c: Client, path: string, json: unknown, headers: Record<string, string> = {}) =>
   c.request(path, { method: "PUT", json, headers });
 
-export const postCsv = (c: Client, slug: string, csv: string | Uint8Array, confirm = false) =>
+export const postCsv = (c: Client, slug: string, csv: string | Uint8Array<ArrayBuffer>, confirm = false) =>
   c.request(`/api/v1/shops/${slug}/inventory/import${confirm ? "?confirm=1" : ""}`, { method: "POST", headers: { "content-type": "text/csv" }, body: csv });
 
 export const bearer = (key: string) => ({ authorization: `Bearer ${key}` });

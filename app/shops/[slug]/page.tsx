@@ -13,6 +13,21 @@ export async function generateMetadata({ params }: { params: Promise<{ slug: str
   return { title: shop?.name ?? "Shop" };
 }
 
+type Line = Awaited<ReturnType<typeof listPublicStock>>[number];
+
+function StockList({ lines }: { lines: Line[] }) {
+  return (
+    <ul className="divide-y divide-line/60 text-sm">
+      {lines.map((s) => (
+        <li key={s.slug} className="flex items-baseline justify-between gap-3 py-1.5">
+          <Link href={`/parts/${s.slug}`} className="min-w-0 truncate text-text hover:underline">{s.maker} {s.model}</Link>
+          <span className="num shrink-0 text-ink">{formatMoney(s.priceCents, s.currency)} <span className="text-xs text-muted">· {s.available} left</span></span>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
 export default async function ShopPage({ params }: { params: Promise<{ slug: string }> }) {
   const shop = await getShopBySlug({ slug: (await params).slug });
   if (!shop) notFound();
@@ -42,15 +57,13 @@ export default async function ShopPage({ params }: { params: Promise<{ slug: str
             {[...byKind].map(([kind, list]) => (
               <div key={kind}>
                 <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-muted">{KIND_LABELS[kind] ?? kind} · {list.length}</h3>
-                <ul className="divide-y divide-line/60 text-sm">
-                  {list.slice(0, 12).map((s) => (
-                    <li key={s.slug} className="flex items-baseline justify-between gap-3 py-1.5">
-                      <Link href={`/parts/${s.slug}`} className="min-w-0 truncate text-text hover:underline">{s.maker} {s.model}</Link>
-                      <span className="num shrink-0 text-ink">{formatMoney(s.priceCents, s.currency)} <span className="text-xs text-muted">· {s.available} left</span></span>
-                    </li>
-                  ))}
-                  {list.length > 12 ? <li className="py-1.5 text-xs text-muted">and {list.length - 12} more</li> : null}
-                </ul>
+                <StockList lines={list.slice(0, 12)} />
+                {list.length > 12 ? (
+                  <details className="text-sm">
+                    <summary className="cursor-pointer py-1.5 text-xs text-muted hover:text-text">and {list.length - 12} more</summary>
+                    <StockList lines={list.slice(12)} />
+                  </details>
+                ) : null}
               </div>
             ))}
           </div>
