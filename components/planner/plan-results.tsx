@@ -82,7 +82,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
 
       {result.solutions.length > 1 ? (
         <Section id="plan-alts" title="Alternatives" aside={`${result.solutions.length} that land in the window, best first`}>
-          <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} />
+          <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} currency={result.context.shop?.currency} />
         </Section>
       ) : null}
 

@@ -1,5 +1,4 @@
 import "server-only";
-import { APIError } from "better-auth/api";
 import { getMemberOrThrow } from "@/db/queries/shops";
 import { getAuth } from "@/lib/auth";
 import { siteOrigin } from "@/lib/builds/site-url";
@@ -12,9 +11,11 @@ async function viaAuth<T>(call: () => Promise<T>): Promise<T> {
   try {
     return await call();
   } catch (err) {
-    if (err instanceof APIError) {
-      const status = err.statusCode;
-      const message = (err.body as { message?: string } | undefined)?.message ?? err.message;
+    // Duck-typed: the bundled server may hold more than one copy of better-auth's APIError class.
+    const api = err as { name?: string; statusCode?: number; body?: { message?: string }; message?: string };
+    if (api && typeof api === "object" && api.name === "APIError" && typeof api.statusCode === "number") {
+      const status = api.statusCode;
+      const message = api.body?.message ?? api.message ?? "The shop could not do that";
       const nice = message.charAt(0).toUpperCase() + message.slice(1).toLowerCase();
       throw new AppError(status === 403 ? "forbidden:shop" : status === 401 ? "unauthorized" : status === 404 ? "not_found:invitation" : "bad_request:shop", nice.endsWith(".") ? nice : `${nice}.`);
     }
