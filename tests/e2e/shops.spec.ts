@@ -73,4 +73,16 @@ describe("a shop in Chromium", () => {
     await wtb.getByText("Kilnworth Astro Supply").waitFor({ timeout: 15_000 });
     expect(memberErrors).toEqual([]);
   });
+
+  it("gives shop staff their own shop's stock in the planner by default", async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 900 } });
+    const errors = watchErrors(page);
+    await signInThroughForm(page, "staff@trainyard.test");
+    await page.goto(`${BASE_URL}${PLAN}`);
+    await expect(page.getByRole("radio", { name: /A shop's stock/ }).isChecked()).resolves.toBe(true);
+    await page.waitForSelector('#plan-answer[aria-busy="false"] [data-testid="plan-verdict"][data-status="ok"]', { timeout: 30_000 });
+    await expect(page.getByTestId("plan-verdict").textContent()).resolves.toContain("at Lantern Row Optics");
+    await expect(page.getByRole("combobox", { name: "Shop" }).inputValue()).resolves.toBe("lantern-row-optics");
+    expect(errors).toEqual([]);
+  });
 });
