@@ -1,11 +1,13 @@
 import Link from "next/link";
 import { allowed, getSessionUser } from "@/lib/auth/session";
+import { listShopsOfUser } from "@/db/queries/shops";
 import { Logo } from "./logo";
 import { NavLinks } from "./nav-links";
 import { NightToggle } from "./night-toggle";
 
 export async function SiteHeader({ night }: { night: boolean }) {
   const user = await getSessionUser().catch(() => null);
+  const inShop = user ? (await listShopsOfUser({ userId: user.id }).catch(() => [])).length > 0 : false;
   return (
     <header className="bg-header text-header-text night:border-b night:border-line">
       <div className="mx-auto flex max-w-[1400px] flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
@@ -18,6 +20,8 @@ export async function SiteHeader({ night }: { night: boolean }) {
             { href: "/plan", label: "Planner" },
             { href: "/parts", label: "Parts" },
             { href: "/builds", label: "Builds" },
+            { href: "/shops", label: "Shops" },
+            ...(inShop ? [{ href: "/shop", label: "Your shop" }] : []),
             ...(allowed(user, { part: "review" }) || allowed(user, { build: "moderate" }) ? [{ href: "/review", label: "Review" }] : []),
             { href: user ? "/account" : "/sign-in", label: user ? "Account" : "Sign in" },
           ]}

@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
-import { check, index, integer, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
-import { organization, parts } from "./schema";
+import { check, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+import { organization, parts, user } from "./schema";
 
 // ── Shops (better-auth organizations) and what they stock ────────────────────────────
 
@@ -42,3 +42,40 @@ export const shopInventory = pgTable("shop_inventory", {
 
 export type ShopProfileRow = typeof shopProfiles.$inferSelect;
 export type ShopInventoryRow = typeof shopInventory.$inferSelect;
+
+/**
+ * Keys a shop's own stock system uses to read and write that shop's inventory. Only a SHA-256
+ * of the secret is kept; the secret is shown once, when the key is made. Scoped to one shop.
+ */
+export const shopApiKeys = pgTable("shop_api_keys", {
+  id: text("id").primaryKey().default(sql`gen_random_uuid()::text`),
+  organizationId: text("organization_id").notNull().references(() => organization.id, { onDelete: "cascade" }),
+  name: text("name").notNull(),
+  /** The first characters of the key, shown so the owner can tell keys apart. */
+  start: text("start").notNull(),
+  keyHash: text("key_hash").notNull(),
+  createdBy: text("created_by").references(() => user.id, { onDelete: "set null" }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+  revokedAt: timestamp("revoked_at", { withTimezone: true }),
+}, (t) => [
+  uniqueIndex("shop_api_keys_hash_uq").on(t.keyHash),
+  index("shop_api_keys_org_idx").on(t.organizationId),
+]);
+
+/**
+ * Solves asked against a shop's stock, kept for "what to stock next". Anonymous by design:
+ * no user id at all, only what was asked (the parts that were needed) and how it went.
+ */
+export const shopSolveLog = pgTable("shop_solve_log", {
+  id: text("id").primaryKey().default(sql`gen_random_uuid()::text`),
+  organizationId: text("organization_id").notNull().references(() => organization.id, { onDelete: "cascade" }),
+  /** ok = answered from stock alone; short = answered only with parts the shop lacks; none = no answer. */
+  outcome: text("outcome").notNull(),
+  /** Catalog part ids the same question's catalog answer used that the shop lacked (in stock). */
+  missingPartIds: jsonb("missing_part_ids").$type<string[]>().notNull().default([]),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("shop_solve_log_org_time_idx").on(t.organizationId, t.createdAt)]);
+
+export type ShopApiKeyRow = typeof shopApiKeys.$inferSelect;
+export type ShopSolveLogRow = typeof shopSolveLog.$inferSelect;

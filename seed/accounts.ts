@@ -1,6 +1,6 @@
 // Demo accounts: invented people on the reserved .test domain, verified, one shared password.
 import { hashPassword } from "better-auth/crypto";
-import { and, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import * as schema from "@/db/schema";
 
@@ -11,8 +11,12 @@ export const DEMO_ACCOUNTS = [
   { email: "moderator@trainyard.test", name: "Tomas Rell", role: "moderator" },
   { email: "admin@trainyard.test", name: "Ada Whitcombe", role: "admin" },
   { email: "shop@trainyard.test", name: "Priya Okonjo", role: "member" },
+  { email: "staff@trainyard.test", name: "Jonah Brisk", role: "member" },
+  { email: "tidewater@trainyard.test", name: "Halvard Teague", role: "member" },
+  { email: "kilnworth@trainyard.test", name: "Maren Holloway", role: "member" },
 ] as const;
 
+/** The demo shop the shop account owns; all three demo shops are in seed/shops.ts. */
 export const DEMO_SHOP = { name: "Lantern Row Optics", slug: "lantern-row-optics", ownerEmail: "shop@trainyard.test" };
 
 type Db = NodePgDatabase<typeof schema>;
@@ -30,18 +34,6 @@ export async function seedAccounts(db: Db): Promise<Record<string, string>> {
       });
     }
     ids[a.email] = id;
-  }
-  const shop = await db.select({ id: schema.organization.id }).from(schema.organization).where(eq(schema.organization.slug, DEMO_SHOP.slug));
-  let shopId = shop[0]?.id;
-  if (!shopId) {
-    shopId = crypto.randomUUID();
-    await db.insert(schema.organization).values({ id: shopId, name: DEMO_SHOP.name, slug: DEMO_SHOP.slug });
-  }
-  const ownerId = ids[DEMO_SHOP.ownerEmail];
-  const membership = await db.select({ id: schema.member.id }).from(schema.member)
-    .where(and(eq(schema.member.organizationId, shopId), eq(schema.member.userId, ownerId)));
-  if (!membership.length) {
-    await db.insert(schema.member).values({ id: crypto.randomUUID(), organizationId: shopId, userId: ownerId, role: "owner" });
   }
   return ids;
 }

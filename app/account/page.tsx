@@ -3,6 +3,7 @@ import { redirect } from "next/navigation";
 import { SignOutButton } from "@/components/account/sign-out-button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
+import { YourShops } from "@/components/shops/your-shops";
 
 export const metadata = { title: "Account" };
 export const dynamic = "force-dynamic";
@@ -24,6 +25,7 @@ export default async function AccountPage() {
           <h2 className="font-medium text-ink">Role: <span className="capitalize">{user.role}</span></h2>
           <p className="mt-1 text-sm text-muted">{ROLE_WORDS[user.role]}</p>
         </Card>
+        <YourShops userId={user.id} />
         <Card>
           <h2 className="font-medium text-ink">Your gear</h2>
           <p className="mt-1 text-sm text-muted">Mark the parts you own; the planner counts them as free and lists only what is still to buy.</p>

@@ -3,6 +3,7 @@
 import { useId } from "react";
 import type { Chain } from "@/lib/solver";
 import { formatPrice } from "@/lib/format";
+import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { signed } from "./train-model";
 
@@ -13,8 +14,10 @@ function connectors(chain: Chain, names: (id: string) => string): string {
   return [...counts].map(([id, n]) => `${n > 1 ? `${n} × ` : ""}${names(id)}`).join(" + ");
 }
 
-export function Alternatives({ solutions, chosen, onChoose, names, unit }: {
+export function Alternatives({ solutions, chosen, onChoose, names, unit, currency }: {
   solutions: Chain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
+  /** A shop's currency when the answer is priced from its stock. */
+  currency?: string;
 }) {
   const name = useId();
   if (solutions.length < 2) return null;
@@ -35,7 +38,7 @@ export function Alternatives({ solutions, chosen, onChoose, names, unit }: {
                 {i === cheapestIndex ? <span className="ml-2 rounded bg-ok/15 px-1.5 py-0.5 text-xs font-medium text-ok">least to buy</span> : null}
               </span>
               <span className="num text-xs text-muted">
-                {c.partCount} part{c.partCount === 1 ? "" : "s"} · {c.priceCents === null ? "price unknown" : c.priceCents === 0 ? "nothing to buy" : formatPrice(c.priceCents)}
+                {c.partCount} part{c.partCount === 1 ? "" : "s"} · {c.priceCents === null ? "price unknown" : c.priceCents === 0 ? "nothing to buy" : currency ? formatMoney(c.priceCents, currency) : formatPrice(c.priceCents)}
               </span>
             </span>
             <span className="num mt-0.5 block text-text">

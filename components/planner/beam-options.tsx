@@ -1,6 +1,7 @@
 "use client";
 // The glass in the beam, the tolerance override and where the parts come from.
 import Link from "next/link";
+import { ShopSourceChoice } from "@/components/shops/shop-source-choice";
 import { useId } from "react";
 import { filterShiftMm } from "@/lib/optics";
 import type { Glass, PlanState } from "@/lib/planner/url-state";
@@ -110,6 +111,8 @@ export function BeamOptions({ state, update, signedIn, signInHref, opticsToleran
               </span>
             </span>
           </label>
+          <ShopSourceChoice name={`${id}-source`} radioClass={RADIO} active={state.source === "shop"} shop={state.shop} shopOwned={state.shopOwned}
+            signedIn={signedIn} onChange={(p) => update(p)} />
         </div>
       </fieldset>
     </div>

@@ -2,6 +2,7 @@
 // What to buy (connectors not owned, with list prices) and what you already own.
 import Link from "next/link";
 import { formatPrice } from "@/lib/format";
+import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import type { Train } from "./train-model";
 
@@ -21,7 +22,9 @@ export function shoppingLines(train: Train): Line[] {
   return [...lines.values()];
 }
 
-export function PartsList({ train, unit, owned }: { train: Train; unit: LengthUnit; owned: boolean }) {
+export function PartsList({ train, unit, owned, currency }: { train: Train; unit: LengthUnit; owned: boolean; currency?: string }) {
+  // A shop's answer carries the shop's prices in its currency; otherwise catalog list prices.
+  const price = (cents: number) => (currency ? formatMoney(cents, currency) : formatPrice(cents));
   const lines = shoppingLines(train);
   const buy = lines.filter((l) => !l.owned);
   const own = lines.filter((l) => l.owned);
@@ -41,14 +44,14 @@ export function PartsList({ train, unit, owned }: { train: Train; unit: LengthUn
                 <tr key={l.id} className="border-b border-line/70">
                   <td className="py-1.5 pr-2 align-top">{l.count > 1 ? `${l.count} × ` : ""}<Link href={`/parts/${l.slug}`} className="text-ink underline-offset-2 hover:underline">{l.name}</Link>
                     <span className="block text-xs text-muted">{formatLength(l.lengthMm, unit)}</span></td>
-                  <td className="py-1.5 text-right align-top">{l.priceCents === null ? <span className="text-muted">price unknown</span> : formatPrice(l.priceCents * l.count)}</td>
+                  <td className="py-1.5 text-right align-top">{l.priceCents === null ? <span className="text-muted">price unknown</span> : price(l.priceCents * l.count)}</td>
                 </tr>
               ))}
             </tbody>
             <tfoot className="num">
               <tr>
-                <th scope="row" className="pt-2 text-left font-semibold text-ink">Total at list prices{unknown ? ` (${unknown} unpriced)` : ""}</th>
-                <td className="pt-2 text-right font-semibold text-ink">{known.length ? formatPrice(total) : "—"}</td>
+                <th scope="row" className="pt-2 text-left font-semibold text-ink">Total at {currency ? "the shop's prices" : "list prices"}{unknown ? ` (${unknown} unpriced)` : ""}</th>
+                <td className="pt-2 text-right font-semibold text-ink">{known.length ? price(total) : "—"}</td>
               </tr>
             </tfoot>
           </table>
@@ -60,7 +63,7 @@ export function PartsList({ train, unit, owned }: { train: Train; unit: LengthUn
           <ul className="space-y-1 text-sm">
             {own.map((l) => <li key={l.id} className="flex justify-between gap-2 border-b border-line/70 py-1.5"><span>{l.count > 1 ? `${l.count} × ` : ""}{l.name}</span><span className="num text-muted">{formatLength(l.lengthMm, unit)}</span></li>)}
           </ul>
-        ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
+        ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : currency ? "Drawing from the shop’s stock only. Tick “Count what I own first” to use your own parts too." : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
       </div>
     </div>
   );

@@ -7,7 +7,8 @@ import { SafetyNote } from "@/components/safety-note";
 import { Alternatives } from "./alternatives";
 import { BudgetStrip } from "./budget-strip";
 import { NoSolution } from "./no-solution";
-import { PartsList } from "./parts-list";
+import { PartsList, shoppingLines } from "./parts-list";
+import { WhereToBuyPanel } from "@/components/shops/where-to-buy-panel";
 import { ChainWarnings, OpticsFacts } from "./plan-facts";
 import { StepsTable } from "./steps-table";
 import { TrainDiagram } from "./train-diagram";
@@ -81,15 +82,17 @@ export function PlanResults({ result, state, update, request, renderActions }: {
 
       {result.solutions.length > 1 ? (
         <Section id="plan-alts" title="Alternatives" aside={`${result.solutions.length} that land in the window, best first`}>
-          <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} />
+          <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} currency={result.context.shop?.currency} />
         </Section>
       ) : null}
 
       {chain ? (
-        <Section id="plan-parts" title="Parts" aside={result.context.source === "owned" ? "your parts count as free" : "list prices"}>
-          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} />
+        <Section id="plan-parts" title="Parts" aside={result.context.shop ? `${result.context.shop.name}'s prices` : result.context.source === "owned" ? "your parts count as free" : "list prices"}>
+          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} currency={result.context.shop?.currency} />
         </Section>
       ) : null}
+
+      {chain ? <WhereToBuyPanel lines={shoppingLines(train).filter((l) => !l.owned)} /> : null}
 
       {load ? null : <SafetyNote />}
     </div>

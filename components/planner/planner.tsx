@@ -87,7 +87,7 @@ export function Planner({ initial, signedIn, renderActions }: PlannerProps) {
   }, [query]);
 
   const ownedBlocked = state.source === "owned" && !signedIn;
-  const request = planStateToSolveRequest(ownedBlocked ? { ...state, source: "catalog" } : state);
+  const request = planStateToSolveRequest(ownedBlocked ? { ...state, source: "catalog" } : !signedIn && state.shopOwned ? { ...state, shopOwned: false } : state);
   const solve = useSolve(request);
   const correctorOrOptics = usePart(state.corrector ?? state.optics);
   const tol = (correctorOrOptics.data as { backFocusToleranceMm?: number } | undefined)?.backFocusToleranceMm ?? null;

@@ -3,6 +3,7 @@
 import type { Chain } from "@/lib/solver";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import { formatPrice } from "@/lib/format";
+import { formatMoney } from "@/lib/shops/money";
 import type { LengthUnit } from "@/lib/units";
 import { isInside, signed } from "./train-model";
 
@@ -70,7 +71,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
       {chain && result.status === "ok" ? (
         <p className="num mt-1 text-sm text-muted">
           {chain.partCount === 0 ? "No connecting parts needed" : `${chain.partCount} connecting part${chain.partCount === 1 ? "" : "s"}`}
-          {toBuy !== null && toBuy !== undefined ? ` · ${toBuy === 0 ? "nothing to buy" : `${formatPrice(toBuy)} at list prices`}` : " · some prices unknown"}
+          {toBuy !== null && toBuy !== undefined ? ` · ${toBuy === 0 ? "nothing to buy" : result.context.shop ? `${formatMoney(toBuy, result.context.shop.currency)} at ${result.context.shop.name}` : `${formatPrice(toBuy)} at list prices`}` : " · some prices unknown"}
           {result.solutions.length > 1 ? ` · alternative ${index + 1} of ${result.solutions.length}` : ""}
           {chain.warnings.length ? <> · <a href="#plan-checks" className="text-warn underline underline-offset-2">▲ {chain.warnings.length} warning{chain.warnings.length === 1 ? "" : "s"}</a></> : null}
         </p>

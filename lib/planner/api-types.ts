@@ -42,6 +42,8 @@ export type PlanContext = {
   fieldOfViewDeg: { width: number; height: number; diagonal: number } | null;
   criticalFocusZoneUm: number | null;
   source: "catalog" | "owned" | "shop";
+  /** With source "shop": the shop whose stock and prices (in its currency) the answer used. */
+  shop?: { slug: string; name: string; currency: string } | null;
   catalogVersion: number;
 };
 

@@ -8,6 +8,7 @@ import {
 } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
 import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
+import { shopStockSource } from "@/lib/shops/stock-source";
 import type { PlanItem, PlanResponse } from "./api-types";
 
 type Ref = { partId: string };
@@ -20,7 +21,7 @@ export type PlanInput = {
   stations?: (Ref | Part)[];
   filters?: SolveRequest["filters"];
   parts?: Part[];
-  source?: { kind: "catalog" | "owned" | "shop"; shopId?: string };
+  source?: { kind: "catalog" | "owned" | "shop" | "shops"; shop?: string; owned?: boolean };
   backFocusToleranceMm?: number;
   maxParts?: number;
   maxSolutions?: number;
@@ -77,6 +78,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
 
   // Parts to draw from.
   let parts: Part[];
+  let shopStock: Awaited<ReturnType<typeof shopStockSource>> | null = null;
   if (input.parts) parts = input.parts;
   else if (!input.source || input.source.kind === "catalog") parts = catalog.connectors;
   else if (input.source.kind === "owned") {
@@ -84,8 +86,11 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     const owned = (await listOwnedParts({ userId: viewer.id })).filter((o) => CONNECTOR_KINDS.has(o.part.kind));
     for (const o of owned) items[`${o.part.slug}~owned`] = rowToPlanItem(o.part, { owned: true });
     parts = [...owned.map((o) => rowToSolverPart(o.part, { owned: true, quantity: o.quantity })), ...catalog.connectors];
+  } else if (input.source.kind === "shop") {
+    shopStock = await shopStockSource({ source: input.source, viewer, items, catalog });
+    parts = shopStock.parts;
   } else {
-    throw new AppError("bad_request:source", "Planning with a shop's stock is not available yet: use the catalog or your own gear.", { "source.kind": ["Shop stock is not available yet"] });
+    throw new AppError("bad_request:source", "Ask every shop at once through POST /api/v1/solve, not inside a plan.", { "source.kind": ["Not here"] });
   }
 
   // The optics (and an optional separate corrector).
@@ -123,6 +128,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   });
 
   const result = solveTrain({ ...base, optics, camera, stations, parts });
+  await shopStock?.record(result, (more) => solveTrain({ ...base, optics, camera, stations, parts: more }));
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
     const rating = telescopeRow.specs.maxLoadG;
@@ -155,6 +161,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     if (row) items[id] = rowToPlanItem(row, { owned: id.endsWith("~owned") });
   }
 
+  shopStock?.priceItems(items);
   return {
     ...result,
     telescopeLink,
@@ -171,7 +178,8 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
         sensorWidthMm: null, sensorHeightMm: null, sensorDiagonalMm: camera.sensorDiagonalMm ?? null, pixelSizeUm: null,
         plateScaleArcsecPerPx: null, fieldOfViewDeg: null, criticalFocusZoneUm: null,
       }),
-      source: input.source?.kind ?? "catalog",
+      source: input.source?.kind === "shops" ? "catalog" : input.source?.kind ?? "catalog",
+      shop: shopStock?.shop ?? null,
       catalogVersion: catalog.version,
     },
   };

@@ -2,13 +2,14 @@
 //
 //   /plan?optics=<slug>&corrector=<slug>&camera=<slug>&stations=<slug>,<slug>
 //        &filter=2&n=1.5168&glass=1&gn=1.458&tol=0.3&source=owned&unit=in&alt=2
+//        (or &source=shop&shop=<shop slug>[&own=1] for one shop's stock, after what I own)
 //
 // `filter`/`n`: the filter in the slot (thickness mm, refractive index); `glass`/`gn`: any
 // extra plate in the beam; `tol`: back focus tolerance override (mm); `alt`: the chosen
 // alternative, counted from 1. Values that do not parse are dropped, never thrown.
 
 export type Glass = { thicknessMm: number; refractiveIndex: number };
-export type SourceKind = "catalog" | "owned";
+export type SourceKind = "catalog" | "owned" | "shop";
 export type LengthUnit = "mm" | "in";
 
 export type PlanState = {
@@ -22,6 +23,9 @@ export type PlanState = {
   extraGlass: Glass | null;
   toleranceMm: number | null;
   source: SourceKind;
+  /** With source "shop": the shop's slug, and whether what I own counts first. */
+  shop: string | null;
+  shopOwned: boolean;
   unit: LengthUnit;
   /** Index of the chosen alternative, from 0 (the URL counts from 1). */
   alt: number;
@@ -35,13 +39,13 @@ export type SolveApiRequest = {
   stations: { partId: string }[];
   filters: { thicknessMm: number; refractiveIndex: number }[];
   backFocusToleranceMm?: number;
-  source: { kind: SourceKind };
+  source: { kind: SourceKind; shop?: string; owned?: boolean };
   maxSolutions: number;
 };
 
 export const EMPTY_PLAN: PlanState = {
   optics: null, corrector: null, camera: null, stations: [], filter: null, extraGlass: null,
-  toleranceMm: null, source: "catalog", unit: "mm", alt: 0,
+  toleranceMm: null, source: "catalog", shop: null, shopOwned: false, unit: "mm", alt: 0,
 };
 
 export const DEFAULT_INDEX = 1.5;
@@ -87,7 +91,9 @@ export function parsePlanParams(params: URLSearchParams): PlanState {
     filter: glass(params, "filter", "n"),
     extraGlass: glass(params, "glass", "gn"),
     toleranceMm: number(params.get("tol"), TOLERANCE_RANGE[0], TOLERANCE_RANGE[1]),
-    source: source === "owned" ? "owned" : "catalog",
+    source: source === "owned" ? "owned" : source === "shop" && slug(params.get("shop")) ? "shop" : "catalog",
+    shop: source === "shop" ? slug(params.get("shop")) : null,
+    shopOwned: source === "shop" && params.get("own") === "1",
     unit: unit === "in" ? "in" : "mm",
     alt: alt !== null && Number.isInteger(alt) ? alt - 1 : 0,
   };
@@ -108,6 +114,10 @@ export function planStateToParams(state: PlanState): URLSearchParams {
   if (state.extraGlass) { p.set("glass", short(state.extraGlass.thicknessMm)); p.set("gn", short(state.extraGlass.refractiveIndex)); }
   if (state.toleranceMm !== null) p.set("tol", short(state.toleranceMm));
   if (state.source === "owned") p.set("source", "owned");
+  if (state.source === "shop" && state.shop) {
+    p.set("source", "shop"); p.set("shop", state.shop);
+    if (state.shopOwned) p.set("own", "1");
+  }
   if (state.unit === "in") p.set("unit", "in");
   if (state.alt > 0) p.set("alt", String(state.alt + 1));
   return p;
@@ -126,7 +136,8 @@ export function planStateToSolveRequest(state: PlanState): SolveApiRequest | nul
     stations: state.stations.map((partId) => ({ partId })),
     filters,
     ...(state.toleranceMm !== null ? { backFocusToleranceMm: state.toleranceMm } : {}),
-    source: { kind: state.source },
+    source: state.source === "shop" && state.shop ? { kind: "shop", shop: state.shop, ...(state.shopOwned ? { owned: true } : {}) }
+      : { kind: state.source === "shop" ? "catalog" : state.source },
     maxSolutions: MAX_SOLUTIONS,
   };
 }

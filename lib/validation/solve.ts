@@ -87,10 +87,13 @@ export const partRefSchema = z.strictObject({
 export type PartRef = z.infer<typeof partRefSchema>;
 
 export const partsSourceSchema = z.object({
-  kind: z.enum(["catalog", "owned", "shop"], { error: "Source is catalog, owned or shop" }),
-  shopId: z.string().min(1).max(LIMITS.idChars).optional(),
+  kind: z.enum(["catalog", "owned", "shop", "shops"], { error: "Source is catalog, owned, shop or shops" }),
+  /** With kind "shop": the shop's slug (its address, /shops/<slug>). */
+  shop: z.string().trim().min(1, "Choose a shop").max(140).optional(),
+  /** With kind "shop": count what the signed-in user owns first ("what I own, then this shop"). */
+  owned: z.boolean().optional(),
 }).superRefine((s, ctx) => {
-  if (s.kind === "shop" && !s.shopId) ctx.addIssue({ code: "custom", path: ["shopId"], message: "Choose a shop" });
+  if (s.kind === "shop" && !s.shop) ctx.addIssue({ code: "custom", path: ["shop"], message: "Choose a shop" });
 });
 export type PartsSource = z.infer<typeof partsSourceSchema>;
 

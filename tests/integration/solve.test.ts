@@ -71,10 +71,10 @@ describe("POST /api/v1/solve with catalog references", () => {
     expect(wrong.body.error.fields["optics.partId"]).toBeDefined();
   });
 
-  it("says plainly that shop stock is not available yet", async () => {
-    const res = await solve(flagshipBody({ source: { kind: "shop", shopId: "lantern-row-optics" } }));
-    expect(res.status).toBe(400);
-    expect(res.body.error.fields["source.kind"][0]).toMatch(/not available yet/);
+  it("answers 404 for a shop that does not exist", async () => {
+    const res = await solve(flagshipBody({ source: { kind: "shop", shop: "no-such-shop" } }));
+    expect(res.status).toBe(404);
+    expect(res.body.error.message).toMatch(/no-such-shop/);
   });
 
   it("refuses absurd sizes", async () => {

@@ -15,9 +15,25 @@ const full: PlanState = {
   extraGlass: { thicknessMm: 1, refractiveIndex: 1.458 },
   toleranceMm: 0.3,
   source: "owned",
+  shop: null,
+  shopOwned: false,
   unit: "in",
   alt: 1,
 };
+
+describe("planner URL: a shop's stock as the source", () => {
+  it("round-trips source=shop with the shop and the owned-first switch", () => {
+    const state = parse("optics=a&camera=b&source=shop&shop=lantern-row-optics&own=1");
+    expect(state).toMatchObject({ source: "shop", shop: "lantern-row-optics", shopOwned: true });
+    expect(parse(planStateToParams(state).toString())).toEqual(state);
+    expect(planStateToSolveRequest(state)?.source).toEqual({ kind: "shop", shop: "lantern-row-optics", owned: true });
+  });
+
+  it("falls back to the catalog when the shop is missing or not a slug", () => {
+    expect(parse("source=shop").source).toBe("catalog");
+    expect(parse("source=shop&shop=Not%20A%20Slug!").source).toBe("catalog");
+  });
+});
 
 describe("planner URL: round trips", () => {
   it("an empty state is an empty query, and back", () => {

@@ -49,7 +49,7 @@ describe("solveRequestSchema", () => {
 
 describe("solveApiRequestSchema", () => {
   it("takes catalog references for optics, camera and stations, and a source instead of parts", () => {
-    const req = { optics: { partId: "flattener-x" }, camera: { partId: "cam" }, stations: [{ partId: "wheel" }, spacer("inline")], source: { kind: "shop", shopId: "s1" } };
+    const req = { optics: { partId: "flattener-x" }, camera: { partId: "cam" }, stations: [{ partId: "wheel" }, spacer("inline")], source: { kind: "shop", shop: "s1" } };
     expect(solveApiRequestSchema.parse(req)).toEqual(req);
     expect(solveApiRequestSchema.parse({ optics, camera, parts: [spacer("a")] })).toMatchObject({ optics, camera });
   });
@@ -58,8 +58,8 @@ describe("solveApiRequestSchema", () => {
     const refs = { optics: { partId: "o" }, camera: { partId: "c" } };
     expect(errors(solveApiRequestSchema, refs)).toEqual({ parts: ["Send either parts or a source of parts"] });
     expect(errors(solveApiRequestSchema, { ...refs, parts: [], source: { kind: "catalog" } })).toEqual({ source: ["Send either parts or a source, not both"] });
-    expect(errors(solveApiRequestSchema, { ...refs, source: { kind: "shop" } })).toEqual({ "source.shopId": ["Choose a shop"] });
-    expect(errors(solveApiRequestSchema, { ...refs, source: { kind: "friends" } })).toEqual({ "source.kind": ["Source is catalog, owned or shop"] });
+    expect(errors(solveApiRequestSchema, { ...refs, source: { kind: "shop" } })).toEqual({ "source.shop": ["Choose a shop"] });
+    expect(errors(solveApiRequestSchema, { ...refs, source: { kind: "friends" } })).toEqual({ "source.kind": ["Source is catalog, owned, shop or shops"] });
   });
 
   it("reports the closest alternative of a reference-or-part field, not just 'invalid'", () => {

@@ -3,6 +3,7 @@ import { PageTitle } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { parsePlanParams, planStateToParams } from "@/lib/planner/url-state";
 import { PlanWorkbench } from "./plan-workbench";
+import { defaultShopSource } from "@/lib/shops/default-source";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Planner" };
@@ -19,8 +20,10 @@ function toSearchParams(search: Search): URLSearchParams {
 }
 
 export default async function PlanPage({ searchParams }: { searchParams: Promise<Search> }) {
-  const initial = parsePlanParams(toSearchParams(await searchParams));
+  const params = toSearchParams(await searchParams);
   const user = await getSessionUser().catch(() => null);
+  // Shop staff plan from their own shop's stock unless the link says otherwise.
+  const initial = { ...parsePlanParams(params), ...(await defaultShopSource({ user, params })) };
   return (
     <>
       <PageTitle title="Planner"

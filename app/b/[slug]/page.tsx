@@ -8,6 +8,7 @@ import { BuildFacts } from "@/components/builds/build-facts";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { OwnerPanel } from "@/components/builds/owner-panel";
 import { PartsList } from "@/components/builds/parts-list";
+import { BuildWhereToBuy } from "@/components/shops/build-where-to-buy";
 import { SharePanel } from "@/components/builds/share-panel";
 import { TrainFigure } from "@/components/builds/train-figure";
 import { SafetyNote } from "@/components/safety-note";
@@ -138,6 +139,7 @@ export default async function BuildPage({ params }: Props) {
         </div>
 
         <aside className="space-y-6">
+          <BuildWhereToBuy lines={lines.filter((l) => l.toBuy).map((l) => ({ slug: l.item.slug, name: l.item.name, count: l.count }))} />
           <section aria-labelledby="share-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
             <h2 id="share-heading" className="font-semibold text-ink">Share</h2>
             <SharePanel url={snippet.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={hasPublicPreview(build)} />

@@ -7,6 +7,7 @@ import { PartProfile } from "@/components/parts/part-profile";
 import { getOwnedQuantity } from "@/db/queries/gear";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { SafetyNote } from "@/components/safety-note";
+import { PartStockists } from "@/components/shops/part-stockists";
 import { ButtonLink } from "@/components/ui/button";
 import { allowed, getSessionUser } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
@@ -100,6 +101,7 @@ export default async function PartPage({ params }: { params: Promise<{ slug: str
           ))}
         </dl>
       </section>
+      {row.status === "approved" ? <PartStockists partId={row.id} /> : null}
       {allowed(user, { part: "review" }) ? <CorrectPartForm slug={p.slug} initial={{ lengthMm: p.lengthMm, adjustMm: p.adjustMm, clearApertureMm: p.clearApertureMm, weightG: p.weightG, listPriceCents: p.listPriceCents }} /> : null}
       {p.kind === "optics" ? <SafetyNote /> : null}
     </article>

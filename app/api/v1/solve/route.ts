@@ -3,6 +3,7 @@ import { readJsonBody, withSession } from "@/lib/auth/session";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { planJson } from "@/lib/planner/plan-cache";
 import type { PlanInput } from "@/lib/planner/run-plan";
+import { planAcrossShops } from "@/lib/shops/across-shops";
 import { parsePlanRequest } from "@/lib/validation/plan";
 
 export const dynamic = "force-dynamic";
@@ -15,5 +16,6 @@ export const POST = withSession(async (request, { user }) => {
     throw new AppError(tooLarge ? "payload_too_large" : "bad_request:validation", tooLarge ? "Too many parts or stations in one request." : "Some fields need attention.", fieldErrorsOf(parsed.issues));
   }
   const input = parsed.data as PlanInput;
+  if (input.source?.kind === "shops") return Response.json(await planAcrossShops({ input, viewer: user }));
   return new Response(await planJson({ input, viewer: user }), { headers: { "content-type": "application/json" } });
 }, { anonymous: true });
