@@ -4,6 +4,7 @@ import * as schema from "@/db/schema";
 import { seedAccounts } from "./accounts";
 import { seedCatalog } from "./catalog-load";
 import { seedGear } from "./gear";
+import { seedOrdersDemo } from "./orders-demo";
 
 /** Seed the demo scenario: accounts, the demo shop and the invented catalog. Safe to repeat. */
 export async function seedDemo(databaseUrl: string, log: (m: string) => void = console.log) {
@@ -13,6 +14,7 @@ export async function seedDemo(databaseUrl: string, log: (m: string) => void = c
     const ids = await seedAccounts(db);
     const added = await seedCatalog(db);
     await seedGear(db, ids["member@trainyard.test"]);
+    await seedOrdersDemo(db);
     log(`[seed] demo accounts ready; ${added} catalog parts added`);
   } finally {
     await pool.end();
