@@ -58,7 +58,7 @@ export function QuoteEditor({ quote }: { quote: QuoteJson }) {
       {message ? <FormMessage tone={message.tone}>{message.text}</FormMessage> : null}
       <div className="overflow-x-auto rounded-lg border border-line bg-surface">
         <table className="w-full min-w-[640px] text-sm">
-          <thead className="border-b border-line text-left text-xs uppercase tracking-wide text-muted">
+          <thead className="whitespace-nowrap border-b border-line text-left text-xs uppercase tracking-wide text-muted">
             <tr>
               <th scope="col" className="px-4 py-2 font-medium">Part</th>
               <th scope="col" className="px-3 py-2 text-right font-medium">On shelf</th>
@@ -78,11 +78,11 @@ export function QuoteEditor({ quote }: { quote: QuoteJson }) {
                   <td className={`num px-3 py-2.5 text-right ${short ? "font-semibold text-bad" : ""}`}>{free ?? "—"}{short ? <div className="text-xs font-normal">short</div> : null}</td>
                   <td className="num px-3 py-2.5 text-right text-muted">{r.requested}</td>
                   <td className="px-3 py-2">
-                    <Input aria-label={`Quantity of ${r.name}`} inputMode="numeric" className="num w-20" value={r.quantity} invalid={!!err(`lines.${i}.quantity`)} onChange={(e) => set(i, { quantity: e.target.value })} />
+                    <Input aria-label={`Quantity of ${r.name}`} inputMode="numeric" className="num max-w-[5rem]" value={r.quantity} invalid={!!err(`lines.${i}.quantity`)} onChange={(e) => set(i, { quantity: e.target.value })} />
                     {err(`lines.${i}.quantity`) ? <p className="mt-1 text-xs text-bad">{err(`lines.${i}.quantity`)}</p> : null}
                   </td>
                   <td className="px-3 py-2">
-                    <Input aria-label={`Unit price of ${r.name}`} inputMode="decimal" className="num w-28" value={r.price} invalid={!!err(`lines.${i}.unitPriceCents`)} onChange={(e) => set(i, { price: e.target.value })} />
+                    <Input aria-label={`Unit price of ${r.name}`} inputMode="decimal" className="num max-w-[7.5rem]" value={r.price} invalid={!!err(`lines.${i}.unitPriceCents`)} onChange={(e) => set(i, { price: e.target.value })} />
                     {err(`lines.${i}.unitPriceCents`) ? <p className="mt-1 text-xs text-bad">{err(`lines.${i}.unitPriceCents`)}</p> : null}
                   </td>
                   <td className="num px-4 py-2.5 text-right">{Number.isFinite(parsed[i].quantity) && parsed[i].unitPriceCents !== null ? formatMoney(parsed[i].quantity * parsed[i].unitPriceCents!, c) : "—"}</td>

@@ -47,7 +47,7 @@ export function QuoteRequestForm({ build, offers, neededCount }: { build: string
                 <span className="block text-xs text-muted">stocks {o.stockedCount} of {neededCount} part{neededCount === 1 ? "" : "s"}{o.shortCount ? ` · ${o.shortCount} short on the shelf` : ""}</span>
               </span>
             </div>
-            <ul className="mt-3 grid gap-1 border-t border-line/70 pt-2 text-xs sm:grid-cols-2">
+            <ul className="mt-3 space-y-1 border-t border-line/70 pt-2 text-xs">
               {o.lines.map((l) => (
                 <li key={l.name} className="flex justify-between gap-2">
                   <span className={l.sku ? "text-text" : "text-muted line-through decoration-muted/60"}>{l.count} × {l.name}</span>

@@ -7,7 +7,7 @@ export const TEST_CARDS = { succeeds: "4242 4242 4242 4242", declines: "4000 000
 const esc = (s: unknown) => String(s).replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 function money(amount: number, currency: string) {
-  const f = new Intl.NumberFormat("en-GB", { style: "currency", currency: currency.toUpperCase() });
+  const f = new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() });
   return f.format(amount / 10 ** (f.resolvedOptions().maximumFractionDigits ?? 2));
 }
 

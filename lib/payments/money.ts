@@ -12,7 +12,7 @@ export function minorDigits(currency: string): number {
 export function formatMoney(minor: number | null | undefined, currency: string): string {
   if (minor === null || minor === undefined) return "—";
   try {
-    return new Intl.NumberFormat("en-GB", { style: "currency", currency }).format(minor / 10 ** minorDigits(currency));
+    return new Intl.NumberFormat("en-US", { style: "currency", currency }).format(minor / 10 ** minorDigits(currency));
   } catch {
     return `${(minor / 100).toFixed(2)} ${currency}`;
   }

@@ -52,7 +52,7 @@ export default async function QuotePage({ params, searchParams }: Props) {
         <div className="space-y-2">
           <div className="flex flex-wrap items-center gap-2"><StatusBadge status={q.status} expiresAt={q.expiresAt} /><span className="code text-sm text-muted">{q.ref}</span></div>
           <h1 className="text-2xl font-semibold tracking-tight text-ink sm:text-3xl">Parts for “{q.build.title}”</h1>
-          <p className="text-sm text-muted">From <strong className="font-semibold text-text">{q.shop.name}</strong> · asked {day(q.createdAt)}{q.quotedAt ? <> · quoted {day(q.quotedAt)}</> : null}</p>
+          <p className="text-sm text-muted">From <strong className="font-semibold text-text">{q.shop.name}</strong> · asked {day(q.createdAt)}{q.quotedAt ? <> · quoted {day(q.quotedAt)}</> : null}{q.paidAt ? <> · paid {day(q.paidAt)}</> : null}</p>
         </div>
         <div className="text-right">
           <div className="text-xs uppercase tracking-wide text-muted">{q.status === "requested" ? "Listed prices" : "Total"}</div>
@@ -70,7 +70,7 @@ export default async function QuotePage({ params, searchParams }: Props) {
       </section>
 
       <section aria-labelledby="lines-h" className="space-y-3">
-        <h2 id="lines-h" className="text-lg font-semibold text-ink">{q.status === "requested" ? "What you asked for" : "What the shop quotes"}</h2>
+        <h2 id="lines-h" className="text-lg font-semibold text-ink">{q.status === "requested" ? "What you asked for" : q.paidAt ? "Your order" : "What the shop quotes"}</h2>
         <OrderLines quote={q} />
         {q.missing.length ? <p className="text-sm text-muted">Not stocked by {q.shop.name}: {q.missing.map((m) => `${m.count} × ${m.name}`).join(", ")}.</p> : null}
       </section>

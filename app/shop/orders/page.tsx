@@ -10,6 +10,10 @@ export const metadata = { title: "Shop orders" };
 
 type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };
 const OPEN = new Set(["requested", "paid"]);
+const COUNTERS = [
+  { label: "To answer", statuses: ["requested"] }, { label: "Quoted, not paid", statuses: ["quoted", "awaiting_payment"] },
+  { label: "To ship", statuses: ["paid"] }, { label: "Shipped", statuses: ["shipped"] },
+];
 
 export default async function ShopOrdersPage({ searchParams }: Props) {
   const user = await getSessionUser();
@@ -29,6 +33,14 @@ export default async function ShopOrdersPage({ searchParams }: Props) {
           </nav>
         ) : null}
       </PageTitle>
+      <dl className="mb-4 grid grid-cols-2 gap-px overflow-hidden rounded-lg border border-line bg-line text-sm sm:grid-cols-4">
+        {COUNTERS.map((c) => (
+          <div key={c.label} className="bg-surface px-4 py-3">
+            <dt className="text-xs uppercase tracking-wide text-muted">{c.label}</dt>
+            <dd className="num mt-0.5 text-2xl font-semibold text-ink">{rows.filter((r) => c.statuses.includes(r.status)).length}</dd>
+          </div>
+        ))}
+      </dl>
       <OrdersTable counterpartLabel="Buyer" rows={rows.map((r) => ({ ...r, counterpart: r.buyerName, href: `/shop/orders/${r.id}` }))}
         empty="No quote requests yet. Buyers ask from a saved build's page; each request arrives here and by e-mail." />
     </div>
