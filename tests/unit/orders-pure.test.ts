@@ -51,3 +51,19 @@ describe("the payment fake's form parser", () => {
     });
   });
 });
+
+describe("parts still to buy for a build", () => {
+  it("counts each connecting part of the chain and the telescope link, less what this buyer owns", async () => {
+    const { partsToBuy } = await import("@/lib/payments/build-lines");
+    const item = (slug: string) => ({ id: slug, slug, name: slug.toUpperCase(), maker: "", model: slug, kind: "spacer", front: null, rear: null, lengthMm: 1, adjustMm: null, clearApertureMm: null, weightG: null, priceCents: 100, owned: false });
+    const result = {
+      context: { items: { s5: item("s5"), s10: item("s10"), a1: item("a1"), cam: item("cam") } },
+      telescopeLink: { solutions: [{ steps: [{ partId: "a1", role: "connector" }] }] },
+    } as never;
+    const chain = { steps: [{ partId: "s5", role: "connector" }, { partId: "s5", role: "connector" }, { partId: "s10~owned", role: "connector" }, { partId: "cam", role: "camera" }] } as never;
+    expect(partsToBuy(result, chain, new Map([["s5", 1], ["s10", 1]]))).toEqual([
+      { slug: "a1", name: "A1", count: 1 },
+      { slug: "s5", name: "S5", count: 1 },
+    ]);
+  });
+});
