@@ -9,15 +9,15 @@ export function OrderLines({ quote, stock = false }: { quote: QuoteJson; stock?:
   const dropped = quote.lines.filter((l) => l.quantity === 0 && quote.status !== "requested");
   return (
     <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full min-w-[560px] text-sm">
+      <table className="w-full text-sm">
         <caption className="sr-only">Parts in this quote</caption>
         <thead className="border-b border-line text-left text-xs uppercase tracking-wide text-muted">
           <tr>
             <th scope="col" className="px-4 py-2 font-medium">Part</th>
-            <th scope="col" className="px-3 py-2 font-medium">SKU</th>
+            <th scope="col" className="hidden px-3 py-2 font-medium sm:table-cell">SKU</th>
             {stock ? <th scope="col" className="px-3 py-2 text-right font-medium">On shelf</th> : null}
             <th scope="col" className="px-3 py-2 text-right font-medium">Qty</th>
-            <th scope="col" className="px-3 py-2 text-right font-medium">Unit</th>
+            <th scope="col" className="hidden px-3 py-2 text-right font-medium sm:table-cell">Unit</th>
             <th scope="col" className="px-4 py-2 text-right font-medium">Amount</th>
           </tr>
         </thead>
@@ -25,11 +25,11 @@ export function OrderLines({ quote, stock = false }: { quote: QuoteJson; stock?:
           {shown.map((l) => (
             <tr key={l.id} className="border-b border-line/70 last:border-0">
               <td className="px-4 py-2.5"><Link href={`/parts/${l.partSlug}`} className="font-medium text-ink underline-offset-4 hover:underline">{l.name}</Link>
-                {l.quantity !== l.requestedQuantity ? <div className="text-xs text-muted">asked for {l.requestedQuantity}</div> : null}</td>
-              <td className="code px-3 py-2.5 text-muted">{l.sku}</td>
+                <div className="text-xs text-muted"><span className="code sm:hidden">{l.sku} · {money(l.unitPriceCents)} each</span>{l.quantity !== l.requestedQuantity ? <span className="block">asked for {l.requestedQuantity}</span> : null}</div></td>
+              <td className="code hidden px-3 py-2.5 text-muted sm:table-cell">{l.sku}</td>
               {stock ? <td className="num px-3 py-2.5 text-right">{l.onHand ?? "—"}{l.reserved ? <span className="text-xs text-muted"> ({l.reserved} held)</span> : null}</td> : null}
               <td className="num px-3 py-2.5 text-right">{l.quantity}</td>
-              <td className="num px-3 py-2.5 text-right">{money(l.unitPriceCents)}</td>
+              <td className="num hidden px-3 py-2.5 text-right sm:table-cell">{money(l.unitPriceCents)}</td>
               <td className="num px-4 py-2.5 text-right">{money(l.quantity * l.unitPriceCents)}</td>
             </tr>
           ))}

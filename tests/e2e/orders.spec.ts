@@ -3,10 +3,10 @@
 // and both see the order paid and the shop's shelf count reduced.
 import path from "node:path";
 import pg from "pg";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { afterAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { TEST_CARDS } from "@/lib/dev/stripe-fake";
-import { SCREENSHOTS, launch, signInThroughForm, watchErrors } from "../support/browser";
+import { SCREENSHOTS, browserContexts, signInThroughForm, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
 import { flagshipRequest } from "../integration/builds-support";
 
@@ -19,19 +19,8 @@ async function shelf(sku: string) {
 }
 
 describe("orders in Chromium", () => {
-  let browser: Browser;
-  const contexts: BrowserContext[] = [];
-  const context = async () => {
-    const c = await browser.newContext({ viewport: { width: 1366, height: 900 } });
-    contexts.push(c);
-    return c;
-  };
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => {
-    for (const c of contexts) await c.close().catch(() => undefined);
-    await browser?.close();
-    await pool.end();
-  });
+  const context = browserContexts({ width: 1366, height: 900 });
+  afterAll(async () => { await pool.end(); });
 
   it("member requests a quote, the shop answers, the member pays on the fake's page, both see it paid and the stock reduced", async () => {
     const member = await (await context()).newPage();
