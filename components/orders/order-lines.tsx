@@ -35,13 +35,23 @@ export function OrderLines({ quote, stock = false }: { quote: QuoteJson; stock?:
           ))}
         </tbody>
         <tfoot className="border-t border-line bg-sunken/60">
-          <tr><th scope="row" colSpan={stock ? 5 : 4} className="px-4 py-2 text-left font-normal text-muted">Shipping</th><td className="num px-4 py-2 text-right">{quote.status === "requested" ? "—" : money(quote.shippingCents)}</td></tr>
-          <tr><th scope="row" colSpan={stock ? 5 : 4} className="px-4 py-2.5 text-left font-semibold">{quote.status === "requested" ? "At the shop's listed prices, before its answer" : "Total"}</th>
+          <tr><FootLabel stock={stock} className="py-2 font-normal text-muted">Shipping</FootLabel><td className="num px-4 py-2 text-right">{quote.status === "requested" ? "—" : money(quote.shippingCents)}</td></tr>
+          <tr><FootLabel stock={stock} className="py-2.5 font-semibold">{quote.status === "requested" ? "At the shop's listed prices, before its answer" : "Total"}</FootLabel>
             <td className="num px-4 py-2.5 text-right text-base font-semibold" data-testid="quote-total">{money(quote.totalCents)}</td></tr>
         </tfoot>
       </table>
       {dropped.length ? <p className="border-t border-line px-4 py-2 text-xs text-muted">Left out by the shop: {dropped.map((l) => l.name).join(", ")}.</p> : null}
     </div>
+  );
+}
+
+/** A footer label spanning the columns shown: SKU and unit price fold into the part cell on a phone. */
+function FootLabel({ stock, className, children }: { stock: boolean; className: string; children: React.ReactNode }) {
+  return (
+    <>
+      <th scope="row" colSpan={stock ? 5 : 4} className={`hidden px-4 text-left sm:table-cell ${className}`}>{children}</th>
+      <th scope="row" colSpan={stock ? 3 : 2} className={`px-4 text-left sm:hidden ${className}`}>{children}</th>
+    </>
   );
 }
 
