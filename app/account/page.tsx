@@ -1,6 +1,8 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { SignOutButton } from "@/components/account/sign-out-button";
+import { OrdersCard } from "@/components/orders/orders-card";
+import { listMemberShops } from "@/db/queries/orders";
 import { Card, PageTitle } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { YourShops } from "@/components/shops/your-shops";
@@ -36,6 +38,7 @@ export default async function AccountPage() {
           <p className="mt-1 text-sm text-muted">Trains you saved as links.</p>
           <Link href="/builds?mine=1" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">See my builds</Link>
         </Card>
+        <OrdersCard shopMember={(await listMemberShops({ userId: user.id })).length > 0} />
         <Card>
           <h2 className="font-medium text-ink">Submit a missing part</h2>
           <p className="mt-1 text-sm text-muted">Send its numbers and a spec sheet; a moderator checks it before it joins the catalog.</p>

@@ -71,8 +71,9 @@ export function SaveBuildButton({ request, solutionIndex, signedIn, defaultTitle
             <div className="space-y-4">
               <p className="text-sm text-muted">Trainyard solved the plan again and stored that answer. {saved.visibility === "private" ? "Only you (and moderators) can open it." : saved.visibility === "unlisted" ? "Anyone with the link can open it." : "It is listed under Builds."}</p>
               <SharePanel url={saved.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={saved.visibility !== "private"} />
-              <div className="flex gap-2">
+              <div className="flex flex-wrap gap-2">
                 <ButtonLink href={`/b/${saved.slug}`}>Open the build page</ButtonLink>
+                <ButtonLink href={`/quotes/new?build=${saved.slug}`} variant="secondary">Ask a shop for a quote</ButtonLink>
                 <Button type="button" variant="ghost" onClick={() => dialog.current?.close()}>Back to the planner</Button>
               </div>
             </div>

@@ -1,5 +1,6 @@
 // Starts what the app needs on this machine: PostgreSQL (unless DATABASE_URL is set), the
-// mail fake (unless SMTP_URL is set) and the S3 fake (unless S3_ENDPOINT is set).
+// mail fake (unless SMTP_URL is set), the S3 fake (unless S3_ENDPOINT is set) and the payment
+// fake (unless STRIPE_SECRET_KEY is set).
 import { randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import net from "node:net";
@@ -8,6 +9,7 @@ import { ensureDatabase, startPostgres } from "@/db/server";
 import { migrateDatabase } from "@/db/migrate";
 import { startMailFake } from "./mail-fake";
 import { startS3Fake } from "./s3-fake";
+import { startStripeFake } from "./stripe-fake";
 
 export async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -71,6 +73,18 @@ export async function startServices(opts: {
       env.S3_ACCESS_KEY_ID = "S3RVER";
       env.S3_SECRET_ACCESS_KEY = "S3RVER";
       log(`[s3] local store at ${s3.endpoint}`);
+    }
+
+    if (process.env.STRIPE_SECRET_KEY) {
+      for (const k of ["STRIPE_SECRET_KEY", "STRIPE_WEBHOOK_SECRET", "STRIPE_API_HOST", "STRIPE_API_PORT", "STRIPE_API_PROTOCOL"]) if (process.env[k]) env[k] = process.env[k]!;
+    } else {
+      const stripe = await startStripeFake({ port: await freePort(), webhookUrl: `http://127.0.0.1:${opts.appPort}/api/v1/webhooks/stripe`, log });
+      stops.push(stripe.stop);
+      Object.assign(env, {
+        STRIPE_SECRET_KEY: stripe.secretKey, STRIPE_WEBHOOK_SECRET: stripe.webhookSecret,
+        STRIPE_API_HOST: stripe.host, STRIPE_API_PORT: String(stripe.port), STRIPE_API_PROTOCOL: "http",
+      });
+      log(`[stripe] local payment fake at ${stripe.url}`);
     }
 
     env.PORT = String(opts.appPort);

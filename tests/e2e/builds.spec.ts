@@ -1,9 +1,9 @@
 // Builds in real Chromium: the demo member saves the flagship train as a link, a signed-out
 // browser opens it, the demo moderator endorses it, and the preview image is a PNG.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { DEMO_CASES } from "@/seed/catalog";
-import { launch, signInThroughForm, watchErrors } from "../support/browser";
+import { browserContexts, signInThroughForm, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 const f = DEMO_CASES.flagship;
@@ -26,18 +26,7 @@ async function saveFromPlanner(page: Page, title: string): Promise<string> {
 }
 
 describe("builds in Chromium", () => {
-  let browser: Browser;
-  const contexts: BrowserContext[] = [];
-  const context = async (opts: Parameters<Browser["newContext"]>[0] = {}) => {
-    const c = await browser.newContext({ viewport: { width: 1440, height: 1000 }, ...opts });
-    contexts.push(c);
-    return c;
-  };
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => {
-    for (const c of contexts) await c.close().catch(() => undefined);
-    await browser?.close();
-  });
+  const context = browserContexts();
 
   it("member saves, a signed-out visitor opens the link, the moderator endorses, the preview is a PNG", async () => {
     const title = `Flagship for the forum ${Date.now()}`;

@@ -1,4 +1,5 @@
-import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from "@/lib/dev/chromium";
 import { BASE_URL, DEMO_PASSWORD } from "./http";
 
@@ -22,3 +23,19 @@ export async function signInThroughForm(page: Page, email: string, password = DE
 }
 
 export const SCREENSHOTS = process.env.SCREENSHOT_DIR;
+
+/** One Chromium for the test file; returns a maker of contexts, all closed with the browser after the file. */
+export function browserContexts(viewport = { width: 1440, height: 1000 }) {
+  let browser: Browser | undefined;
+  const contexts: BrowserContext[] = [];
+  beforeAll(async () => { browser = await launch(); });
+  afterAll(async () => {
+    for (const c of contexts) await c.close().catch(() => undefined);
+    await browser?.close();
+  });
+  return async (opts: Parameters<Browser["newContext"]>[0] = {}) => {
+    const c = await browser!.newContext({ viewport, ...opts });
+    contexts.push(c);
+    return c;
+  };
+}

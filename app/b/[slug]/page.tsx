@@ -6,6 +6,7 @@ import { AuditLog } from "@/components/builds/audit-log";
 import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "@/components/builds/badges";
 import { BuildFacts } from "@/components/builds/build-facts";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
+import { QuoteRequestPanel } from "@/components/orders/quote-request-panel";
 import { OwnerPanel } from "@/components/builds/owner-panel";
 import { PartsList } from "@/components/builds/parts-list";
 import { BuildWhereToBuy } from "@/components/shops/build-where-to-buy";
@@ -139,6 +140,7 @@ export default async function BuildPage({ params }: Props) {
         </div>
 
         <aside className="space-y-6">
+          {lines.some((l) => l.toBuy) || !owner ? <QuoteRequestPanel slug={build.slug} signedIn={!!viewer} /> : null}
           <BuildWhereToBuy lines={lines.filter((l) => l.toBuy).map((l) => ({ slug: l.item.slug, name: l.item.name, count: l.count }))} />
           <section aria-labelledby="share-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
             <h2 id="share-heading" className="font-semibold text-ink">Share</h2>
