@@ -75,6 +75,22 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
         </ul>
       </>
     );
+  } else if (result.missingJoint) {
+    const mj = result.missingJoint;
+    const codes = [mj.sky?.interface, mj.sensor?.interface].filter((c): c is string => !!c);
+    body = (
+      <>
+        <p>Between the {itemName(result, mj.skyId)} and the {itemName(result, mj.sensorId)} the train needs {mj.needed ?? "an adapter"}.</p>
+        <ul className="mt-2 space-y-1.5">
+          {mj.adapterIds.length ? mj.adapterIds.slice(0, 3).map((id) => (
+            <Suggestion key={id}><Link className={linkClass} href={`/parts/${id}`}>{itemName(result, id)}</Link> joins them.</Suggestion>
+          )) : <Suggestion>There is none in the catalog. Choose a corrector made for this telescope&apos;s focuser, or <Link className={linkClass} href="/parts/submit">submit the adapter</Link> if you know one.</Suggestion>}
+          {codes.map((code) => (
+            <Suggestion key={code}><Link className={linkClass} href={`/parts?interface=${encodeURIComponent(code)}`}>Parts with <span className="code">{interfaceLabel(code)}</span></Link></Suggestion>
+          ))}
+        </ul>
+      </>
+    );
   } else if (result.status === "no-connection") {
     const codes = interfacesInvolved(result);
     body = (

@@ -57,7 +57,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
       {result.status !== "ok" ? <NoSolution result={result} unit={unit} onRemoveStation={(i) => update({ stations: state.stations.filter((_, j) => j !== i) })} /> : null}
       {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
 
-      <Section id="plan-diagram" title="The train" aside={isSolution ? null : chain ? "The shortest connection — it misses the window" : "Not connected"}>
+      <Section id="plan-diagram" title="The train" aside={isSolution ? null : result.missingJoint ? "Missing a joint between the telescope and the corrector" : chain ? "The shortest connection — it misses the window" : "Not connected"}>
         <TrainDiagram train={train} unit={unit} label={diagramLabel} warnings={warnedParts} />
       </Section>
 
@@ -75,7 +75,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
       <Section id="plan-checks" title="Checks and numbers">
         <div className="space-y-3">
           <ChainWarnings chain={chain} names={names} />
-          <OpticsFacts ctx={result.context} train={train} />
+          <OpticsFacts result={result} chain={chain} />
         </div>
       </Section>
 
@@ -86,8 +86,8 @@ export function PlanResults({ result, state, update, request, renderActions }: {
       ) : null}
 
       {chain ? (
-        <Section id="plan-parts" title="Parts" aside={result.context.source === "owned" ? "your parts count as free" : "list prices"}>
-          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} />
+        <Section id="plan-parts" title="Parts" aside={result.missingJoint ? "incomplete: a joint is missing" : result.context.source === "owned" ? "your parts count as free" : "list prices"}>
+          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} missing={result.missingJoint ?? null} names={names} />
         </Section>
       ) : null}
 

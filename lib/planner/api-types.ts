@@ -1,6 +1,7 @@
 // The JSON that POST /api/v1/solve answers when called with catalog references: the
 // solver's SolveResult (SOLVER.md) plus what a page needs to draw and explain it.
 import type { SolveResult } from "@/lib/solver";
+import type { MissingJoint } from "./join-plan";
 
 export type PlanItem = {
   /** The id used in the solver's steps (catalog slug; owned copies end in "~owned"). */
@@ -49,4 +50,11 @@ export type PlanResponse = SolveResult & {
   context: PlanContext;
   /** Telescope → corrector connection (no back focus), when a telescope and a corrector are both chosen. */
   telescopeLink: SolveResult | null;
+  /**
+   * Set when the telescope cannot join its corrector: the plan is then "no-connection" as a
+   * whole, `solutions` is empty and `shortest` is the best train behind the corrector.
+   */
+  missingJoint?: MissingJoint | null;
+  /** Status of the corrector → camera side alone (equal to `status` unless a joint in front is missing). */
+  rearStatus?: SolveResult["status"];
 };

@@ -9,6 +9,7 @@ import {
 import { AppError } from "@/lib/errors";
 import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import type { PlanItem, PlanResponse } from "./api-types";
+import { joinPlan } from "./join-plan";
 
 type Ref = { partId: string };
 const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
@@ -30,7 +31,7 @@ export type PlanInput = {
 // graph cache (keyed by this array) is reused across requests.
 let catalogCache: { version: number; rows: Map<string, PartRow>; connectors: Part[] } | null = null;
 
-async function catalogConnectors() {
+export async function catalogConnectors() {
   const version = await getCatalogVersion();
   if (!catalogCache || catalogCache.version !== version) {
     const rows = await listAllApprovedParts();
@@ -139,16 +140,28 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     }
   }
   let telescopeLink: SolveResult | null = null;
+  let catalogLink: SolveResult | null = null;
+  let scopePart: Part | null = null, correctorPart: Part | null = null;
   if (telescopeRow && correctorRow) {
     // Telescope → corrector: any mating chain will do (no back focus on this side).
-    const scope: Optics = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
-    const corrAsEnd: Camera = { ...rowToSolverPart(correctorRow), id: `${correctorRow.slug}`, rear: null, lengthMm: 0 };
-    telescopeLink = solveTrain({ optics: scope, camera: corrAsEnd, parts, maxSolutions: 3, maxParts: 6 });
+    scopePart = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
+    correctorPart = { ...rowToSolverPart(correctorRow), id: `${correctorRow.slug}`, rear: null, lengthMm: 0 };
+    const link = (from: Part[]) => solveTrain({ optics: scopePart!, camera: correctorPart!, parts: from, maxSolutions: 3, maxParts: 6 });
+    telescopeLink = link(parts);
+    // Not joined with the plan's own parts: would the catalog join it? (Said in the reason.)
+    if (telescopeLink.status !== "ok") catalogLink = parts === catalog.connectors ? telescopeLink : link(catalog.connectors);
   }
+  const joined = joinPlan({
+    rear: result, link: telescopeLink, catalogLink,
+    telescope: scopePart && telescopeRow ? { ...scopePart, name: `${telescopeRow.maker} ${telescopeRow.model}` } : null,
+    corrector: correctorPart && correctorRow ? { ...correctorPart, name: `${correctorRow.maker} ${correctorRow.model}` } : null,
+    nameOf: (id) => { const r = catalog.rows.get(id); return r ? `${r.maker} ${r.model}` : id; },
+  });
 
   const used = new Set<string>();
-  collectIds(result, used);
+  collectIds(joined, used);
   collectIds(telescopeLink, used);
+  for (const id of joined.missingJoint?.adapterIds ?? []) used.add(id);
   for (const id of used) {
     if (items[id]) continue;
     const row = catalog.rows.get(id.replace(/~owned$/, ""));
@@ -156,7 +169,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   }
 
   return {
-    ...result,
+    ...joined,
     telescopeLink,
     context: {
       items,
