@@ -74,6 +74,11 @@ export function PlanResults({ result, state, update, request, renderActions }: {
 
       <Section id="plan-checks" title="Checks and numbers">
         <div className="space-y-3">
+          {result.missingJoint ? (
+            <p role="alert" className="rounded-md border border-bad/50 bg-bad/5 px-3 py-2 text-sm text-text">
+              <span className="font-semibold text-bad">▲ Missing joint · telescope → corrector</span><br />{result.missingJoint.detail}
+            </p>
+          ) : null}
           <ChainWarnings chain={chain} names={names} />
           <OpticsFacts result={result} chain={chain} />
         </div>

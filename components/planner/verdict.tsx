@@ -46,7 +46,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         {result.missingJoint ? (
           <>
             <span className="font-semibold text-bad">The telescope does not join the corrector.</span>{" "}
-            <span className="text-base text-text">{result.reason}</span>
+            <span className="text-base text-text">{result.missingJoint.detail}</span>
           </>
         ) : result.status === "out-of-reach" && T !== null && result.nearest ? (
           <>

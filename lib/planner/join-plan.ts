@@ -16,6 +16,8 @@ export type MissingJoint = {
   adapterIds: string[];
   /** The adapter the gap needs, in words ("2-inch barrel (male) front, M63 × 1 (female) rear"). */
   needed: string | null;
+  /** The joint and the fix in words (the plan's reason without its lead-in). */
+  detail: string;
 };
 
 const portText = (p: Port) => `${getInterface(p.interface)?.name ?? p.interface} (${p.gender})`;
@@ -61,7 +63,7 @@ export function joinPlan({ rear, link, telescope, corrector, catalogLink, nameOf
   const adapterIds = adaptersFrom(catalogLink ?? null);
   const missingJoint: MissingJoint = {
     skyId: telescope.id, sensorId: corrector.id, sky: telescope.rear, sensor: corrector.front,
-    adapterIds, needed: neededAdapter(telescope.rear, corrector.front),
+    adapterIds, needed: neededAdapter(telescope.rear, corrector.front), detail: "",
   };
   const joint = telescope.rear && corrector.front
     ? `the ${telescope.name}'s ${portText(telescope.rear)} rear does not mate with the ${corrector.name}'s ${portText(corrector.front)} front`
@@ -69,6 +71,8 @@ export function joinPlan({ rear, link, telescope, corrector, catalogLink, nameOf
   const fix = adapterIds.length
     ? `The catalog has what joins them: ${adapterIds.slice(0, 3).map(nameOf).join("; ")}.`
     : `It needs ${missingJoint.needed ?? "an adapter"}: there is none in the catalog.`;
+  const sentence = joint[0].toUpperCase() + joint.slice(1);
+  missingJoint.detail = `${sentence}. ${fix}`;
   // Behind the corrector the train may well reach focus; it is kept (as `shortest`, so the
   // diagram can draw it) but offered as nothing: no alternatives, nothing to save.
   const behind = rear.solutions[0] ?? rear.shortest;
