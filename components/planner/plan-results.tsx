@@ -57,12 +57,12 @@ export function PlanResults({ result, state, update, request, renderActions }: {
       {result.status !== "ok" ? <NoSolution result={result} unit={unit} onRemoveStation={(i) => update({ stations: state.stations.filter((_, j) => j !== i) })} /> : null}
       {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
 
-      <Section id="plan-diagram" title="The train" aside={isSolution ? null : result.missingJoint ? "Missing a joint between the telescope and the corrector" : chain ? "The shortest connection — it misses the window" : "Not connected"}>
+      <Section id="plan-diagram" title="The train" aside={isSolution ? null : result.missingJoint ? "Missing a joint between the telescope and the corrector" : result.nearestChain ? "The nearest reachable chain — it misses the window" : chain ? "The shortest connection — it misses the window" : "Not connected"}>
         <TrainDiagram train={train} unit={unit} label={diagramLabel} warnings={warnedParts} />
       </Section>
 
       {chain ? (
-        <Section id="plan-budget" title="Back focus budget" aside={result.targetMm === null ? "no back focus set by these optics" : `${result.solutions.length ? "chosen chain" : "shortest chain"}, to scale`}>
+        <Section id="plan-budget" title="Back focus budget" aside={result.targetMm === null ? "no back focus set by these optics" : `${result.solutions.length ? "chosen chain" : result.nearestChain ? "nearest reachable chain" : "shortest chain"}, to scale`}>
           <BudgetStrip chain={chain} names={names} targetMm={result.targetMm} toleranceMm={result.toleranceMm}
             filterShiftMm={result.filterShiftMm} nearest={result.status === "ok" ? null : result.nearest} unit={unit} />
         </Section>

@@ -1,6 +1,6 @@
 // The JSON that POST /api/v1/solve answers when called with catalog references: the
 // solver's SolveResult (SOLVER.md) plus what a page needs to draw and explain it.
-import type { SolveResult } from "@/lib/solver";
+import type { Chain, SolveResult } from "@/lib/solver";
 import type { MissingJoint } from "./join-plan";
 
 export type PlanItem = {
@@ -55,6 +55,8 @@ export type PlanResponse = SolveResult & {
    * whole, `solutions` is empty and `shortest` is the best train behind the corrector.
    */
   missingJoint?: MissingJoint | null;
+  /** When nothing lands in the window: the chain that reaches the nearer of the nearest distances. */
+  nearestChain?: Chain | null;
   /** Status of the corrector → camera side alone (equal to `status` unless a joint in front is missing). */
   rearStatus?: SolveResult["status"];
 };

@@ -10,6 +10,7 @@ import { AppError } from "@/lib/errors";
 import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import type { PlanItem, PlanResponse } from "./api-types";
 import { joinPlan } from "./join-plan";
+import { nearestChain } from "./nearest-chain";
 
 type Ref = { partId: string };
 const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
@@ -123,14 +124,16 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     return rowToSolverPart(row);
   });
 
-  const result = solveTrain({ ...base, optics, camera, stations, parts });
+  const request: SolveRequest = { ...base, optics, camera, stations, parts };
+  const result = solveTrain(request);
+  const nearest = nearestChain(request, result);
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
     const rating = telescopeRow.specs.maxLoadG;
     const corrG = correctorRow.weightG ?? 0;
     let weightOf: Map<string, number> | undefined; // built only when a load warning needs it
 
-    for (const chain of [result.shortest, ...result.solutions]) {
+    for (const chain of [result.shortest, ...result.solutions, nearest]) {
       for (const w of chain?.warnings ?? []) {
         if (w.code !== "load") continue;
         weightOf ??= new Map([...parts, ...stations, camera].map((p) => [p.id, p.weightG ?? 0]));
@@ -160,6 +163,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
 
   const used = new Set<string>();
   collectIds(joined, used);
+  for (const s of nearest?.steps ?? []) used.add(s.partId);
   collectIds(telescopeLink, used);
   for (const id of joined.missingJoint?.adapterIds ?? []) used.add(id);
   for (const id of used) {
@@ -170,6 +174,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
 
   return {
     ...joined,
+    nearestChain: joined.status === "out-of-reach" ? nearest : null,
     telescopeLink,
     context: {
       items,

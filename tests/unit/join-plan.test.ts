@@ -39,6 +39,7 @@ describe("joinPlan", () => {
     expect(plan.reason).toContain("Test M63 Reducer's M63 × 1 (male) front");
     expect(plan.reason).toContain("none in the catalog");
     expect(plan.missingJoint).toMatchObject({ skyId: "scope", sensorId: "reducer", adapterIds: [] });
+    expect(plan.reason).toBe(`The telescope does not join the corrector: ${plan.missingJoint!.detail[0].toLowerCase()}${plan.missingJoint!.detail.slice(1)}`);
     expect(plan.missingJoint!.needed).toBe(neededAdapter(scope.rear, reducer.front));
     expect(plan.missingJoint!.needed).toBe("an adapter with a 2-inch barrel (male) front and an M63 × 1 (female) rear");
   });
