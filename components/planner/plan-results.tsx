@@ -54,7 +54,10 @@ export function PlanResults({ result, state, update, request, renderActions }: {
           <div className="mt-2"><SafetyNote /></div>
         </div>
       ) : null}
-      {result.status !== "ok" ? <NoSolution result={result} unit={unit} onRemoveStation={(i) => update({ stations: state.stations.filter((_, j) => j !== i) })} /> : null}
+      {result.status !== "ok" ? <NoSolution result={result} unit={unit} onApply={(patch) => update({
+        stations: state.stations.filter((_, j) => !patch.removeStations.includes(j)),
+        ...(patch.camera ? { camera: patch.camera } : {}), ...(patch.corrector ? { corrector: patch.corrector } : {}),
+      })} /> : null}
       {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
 
       <Section id="plan-diagram" title="The train" aside={isSolution ? null : result.missingJoint ? "Missing a joint between the telescope and the corrector" : result.nearestChain ? "The nearest reachable chain — it misses the window" : chain ? "The shortest connection — it misses the window" : "Not connected"}>

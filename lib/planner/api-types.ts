@@ -2,6 +2,7 @@
 // solver's SolveResult (SOLVER.md) plus what a page needs to draw and explain it.
 import type { Chain, SolveResult } from "@/lib/solver";
 import type { MissingJoint } from "./join-plan";
+import type { Remedy } from "./what-to-change";
 
 export type PlanItem = {
   /** The id used in the solver's steps (catalog slug; owned copies end in "~owned"). */
@@ -55,6 +56,8 @@ export type PlanResponse = SolveResult & {
    * whole, `solutions` is empty and `shortest` is the best train behind the corrector.
    */
   missingJoint?: MissingJoint | null;
+  /** When nothing lands in the window: the smallest sets of changes (one, else two) that make it land. */
+  remedies?: Remedy[];
   /** When nothing lands in the window: the chain that reaches the nearer of the nearest distances. */
   nearestChain?: Chain | null;
   /** Status of the corrector → camera side alone (equal to `status` unless a joint in front is missing). */

@@ -11,6 +11,7 @@ import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, typ
 import type { PlanItem, PlanResponse } from "./api-types";
 import { joinPlan } from "./join-plan";
 import { nearestChain } from "./nearest-chain";
+import { whatToChange } from "./what-to-change";
 
 type Ref = { partId: string };
 const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
@@ -161,9 +162,14 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     nameOf: (id) => { const r = catalog.rows.get(id); return r ? `${r.maker} ${r.model}` : id; },
   });
 
+  const remedies = joined.status === "too-long" || joined.status === "out-of-reach"
+    ? whatToChange({ request, ...remedyCandidates({ catalog, camera, telescopeRow, correctorRow, parts, tolerance: input.backFocusToleranceMm }) })
+    : [];
+
   const used = new Set<string>();
   collectIds(joined, used);
   for (const s of nearest?.steps ?? []) used.add(s.partId);
+  for (const r of remedies) for (const c of r.changes) used.add(c.id);
   collectIds(telescopeLink, used);
   for (const id of joined.missingJoint?.adapterIds ?? []) used.add(id);
   for (const id of used) {
@@ -174,6 +180,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
 
   return {
     ...joined,
+    remedies,
     nearestChain: joined.status === "out-of-reach" ? nearest : null,
     telescopeLink,
     context: {
@@ -193,4 +200,37 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
       catalogVersion: catalog.version,
     },
   };
+}
+
+type Catalog = Awaited<ReturnType<typeof catalogConnectors>>;
+
+/**
+ * What "what to change" may swap in: catalog cameras with about the same sensor or larger
+ * (one per front face and depth), and — behind a telescope only — catalog correctors that
+ * join it. An astrograph's corrector is built in, so nothing replaces it.
+ */
+function remedyCandidates({ catalog, camera, telescopeRow, correctorRow, parts, tolerance }: {
+  catalog: Catalog; camera: Camera; telescopeRow: PartRow | null; correctorRow: PartRow | null; parts: Part[]; tolerance?: number;
+}): { cameras: Camera[]; correctors: Optics[] } {
+  const diag = camera.sensorDiagonalMm ?? 0;
+  const byFace = new Map<string, Camera>();
+  for (const row of catalog.rows.values()) {
+    if (row.kind !== "camera") continue;
+    const cam = buildCamera(row);
+    if (!cam.front || (cam.sensorDiagonalMm ?? 0) < 0.8 * diag) continue;
+    const key = `${cam.front.interface}|${cam.front.gender}|${cam.lengthMm}`;
+    const prev = byFace.get(key);
+    if (!prev || Math.abs((cam.sensorDiagonalMm ?? 0) - diag) < Math.abs((prev.sensorDiagonalMm ?? 0) - diag)) byFace.set(key, cam);
+  }
+  const correctors: Optics[] = [];
+  if (telescopeRow && correctorRow) {
+    const scope = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
+    for (const row of catalog.rows.values()) {
+      if (row.kind !== "optics" || row.specs.opticsRole !== "corrector" || row.slug === correctorRow.slug) continue;
+      const end = { ...rowToSolverPart(row), rear: null, lengthMm: 0 };
+      if (solveTrain({ optics: scope, camera: end, parts, maxSolutions: 1, maxParts: 6 }).status !== "ok") continue;
+      correctors.push(buildOptics(telescopeRow, row, tolerance).optics);
+    }
+  }
+  return { cameras: [...byFace.values()], correctors };
 }
