@@ -6,6 +6,7 @@ import type { PlanState, SolveApiRequest } from "@/lib/planner/url-state";
 import { SafetyNote } from "@/components/safety-note";
 import { Alternatives } from "./alternatives";
 import { BudgetStrip } from "./budget-strip";
+import { FilterPromptNote } from "./filter-prompt";
 import { NoSolution } from "./no-solution";
 import { PartsList } from "./parts-list";
 import { ChainWarnings, OpticsFacts } from "./plan-facts";
@@ -47,6 +48,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
   return (
     <div className="space-y-4">
       <Verdict result={result} chain={chain} index={index} unit={unit} onUnit={(u) => update({ unit: u })} />
+      <FilterPromptNote result={result} glass={state.filter ?? state.extraGlass} onCount={(g) => update({ filter: g })} />
       {load ? (
         <div role="alert" className="rounded-lg border-2 border-bad/60 bg-bad/5 p-4 text-sm">
           <p className="font-semibold text-bad">▲ Heavier than the focuser is rated for</p>

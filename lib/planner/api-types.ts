@@ -21,6 +21,8 @@ export type PlanItem = {
   /** Price the solver counted: 0 for owned parts, the list price for catalog parts, null when unknown. */
   priceCents: number | null;
   owned: boolean;
+  /** Filter wheels and drawers: the filter thickness their spec says they hold. */
+  filterThicknessMm?: number;
 };
 
 export type PlanContext = {
