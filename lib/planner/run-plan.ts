@@ -7,8 +7,9 @@ import {
   CONNECTOR_KINDS, buildCamera, buildOptics, derivedNumbers, rowToPlanItem, rowToSolverPart,
 } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
-import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
+import { DEFAULT_MAX_SOLUTIONS, solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import type { PlanItem, PlanResponse } from "./api-types";
+import { groupByGeometry, type PlanChain } from "./geometry";
 import { joinPlan } from "./join-plan";
 import { nearestChain } from "./nearest-chain";
 import { whatToChange } from "./what-to-change";
@@ -62,7 +63,8 @@ async function resolveRefs(input: PlanInput) {
 
 function collectIds(result: SolveResult | null, into: Set<string>) {
   if (!result) return;
-  for (const chain of [result.shortest, ...result.solutions]) for (const s of chain?.steps ?? []) into.add(s.partId);
+  const variants = result.solutions.flatMap((c) => (c as PlanChain).variants ?? []);
+  for (const chain of [result.shortest, ...result.solutions, ...variants]) for (const s of chain?.steps ?? []) into.add(s.partId);
 }
 
 /** Solve a plan whose items may be catalog references; inline-only requests are solved as they are. */
@@ -126,7 +128,12 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   });
 
   const request: SolveRequest = { ...base, optics, camera, stations, parts };
-  const result = solveTrain(request);
+  // Ask for more multisets than will be shown, so other makers' copies of a chain become its
+  // variants instead of filling the list of alternatives (geometry.ts).
+  const wanted = input.maxSolutions ?? DEFAULT_MAX_SOLUTIONS;
+  const pooled = solveTrain({ ...request, maxSolutions: Math.min(50, wanted * 4) });
+  const shapes = new Map<string, Part>([...parts, ...stations].map((p) => [p.id, p]));
+  const result: SolveResult = { ...pooled, solutions: groupByGeometry(pooled.solutions, (id) => shapes.get(id), wanted) };
   const nearest = nearestChain(request, result);
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
@@ -134,7 +141,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     const corrG = correctorRow.weightG ?? 0;
     let weightOf: Map<string, number> | undefined; // built only when a load warning needs it
 
-    for (const chain of [result.shortest, ...result.solutions, nearest]) {
+    for (const chain of [result.shortest, ...result.solutions, ...result.solutions.flatMap((c) => (c as PlanChain).variants ?? []), nearest]) {
       for (const w of chain?.warnings ?? []) {
         if (w.code !== "load") continue;
         weightOf ??= new Map([...parts, ...stations, camera].map((p) => [p.id, p.weightG ?? 0]));
