@@ -10,6 +10,7 @@ import { AppError } from "@/lib/errors";
 import { DEFAULT_MAX_SOLUTIONS, solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import type { PlanItem, PlanResponse } from "./api-types";
 import { groupByGeometry, type PlanChain } from "./geometry";
+import { byPartsThenDetours, countDetours } from "./detours";
 import { joinPlan } from "./join-plan";
 import { nearestChain } from "./nearest-chain";
 import { whatToChange } from "./what-to-change";
@@ -133,7 +134,8 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   const wanted = input.maxSolutions ?? DEFAULT_MAX_SOLUTIONS;
   const pooled = solveTrain({ ...request, maxSolutions: Math.min(50, wanted * 4) });
   const shapes = new Map<string, Part>([...parts, ...stations].map((p) => [p.id, p]));
-  const result: SolveResult = { ...pooled, solutions: groupByGeometry(pooled.solutions, (id) => shapes.get(id), wanted) };
+  const ranked = byPartsThenDetours(pooled.solutions).map((c) => ({ ...c, detours: countDetours(c) }));
+  const result: SolveResult = { ...pooled, solutions: groupByGeometry(ranked, (id) => shapes.get(id), wanted) };
   const nearest = nearestChain(request, result);
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
