@@ -3,10 +3,9 @@ import "server-only";
 // picker marks those and lists them first, so a new user is not offered a reducer whose
 // thread the focuser does not have.
 import { getPartOrThrow } from "@/db/queries/parts";
-import { rowToSolverPart } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
-import { solveTrain } from "@/lib/solver";
 import { catalogConnectors } from "./run-plan";
+import { solveLink } from "./telescope-link";
 
 export type CorrectorJoin = { slug: string; joins: boolean; adapters: number };
 
@@ -16,13 +15,10 @@ export async function correctorJoins({ telescope }: { telescope: string }): Prom
     throw new AppError("bad_request:validation", `${row.maker} ${row.model} is not a telescope.`, { telescope: ["Not a telescope"] });
   }
   const catalog = await catalogConnectors();
-  const scope = { ...rowToSolverPart(row), lengthMm: 0 };
   const correctors: CorrectorJoin[] = [];
   for (const c of catalog.rows.values()) {
     if (c.kind !== "optics" || c.specs.opticsRole !== "corrector") continue;
-    const end = { ...rowToSolverPart(c), rear: null, lengthMm: 0 };
-    // Same limits as the plan's own telescope → corrector link (run-plan.ts).
-    const link = solveTrain({ optics: scope, camera: end, parts: catalog.connectors, maxSolutions: 1, maxParts: 6 });
+    const link = solveLink(row, c, catalog.connectors);
     correctors.push({ slug: c.slug, joins: link.status === "ok", adapters: link.solutions[0]?.partCount ?? 0 });
   }
   return { telescope: row.slug, correctors };

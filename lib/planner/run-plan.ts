@@ -12,6 +12,7 @@ import type { PlanItem, PlanResponse } from "./api-types";
 import { groupByGeometry, type PlanChain } from "./geometry";
 import { byPartsThenDetours, countDetours } from "./detours";
 import { joinPlan } from "./join-plan";
+import { linkEnds, solveLink } from "./telescope-link";
 import { nearestChain } from "./nearest-chain";
 import { whatToChange } from "./what-to-change";
 
@@ -157,9 +158,8 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   let scopePart: Part | null = null, correctorPart: Part | null = null;
   if (telescopeRow && correctorRow) {
     // Telescope → corrector: any mating chain will do (no back focus on this side).
-    scopePart = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
-    correctorPart = { ...rowToSolverPart(correctorRow), id: `${correctorRow.slug}`, rear: null, lengthMm: 0 };
-    const link = (from: Part[]) => solveTrain({ optics: scopePart!, camera: correctorPart!, parts: from, maxSolutions: 3, maxParts: 6 });
+    ({ scope: scopePart, end: correctorPart } = linkEnds(telescopeRow, correctorRow));
+    const link = (from: Part[]) => solveLink(telescopeRow!, correctorRow!, from, 3);
     telescopeLink = link(parts);
     // Not joined with the plan's own parts: would the catalog join it? (Said in the reason.)
     if (telescopeLink.status !== "ok") catalogLink = parts === catalog.connectors ? telescopeLink : link(catalog.connectors);
@@ -233,11 +233,9 @@ function remedyCandidates({ catalog, camera, telescopeRow, correctorRow, parts, 
   }
   const correctors: Optics[] = [];
   if (telescopeRow && correctorRow) {
-    const scope = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
     for (const row of catalog.rows.values()) {
       if (row.kind !== "optics" || row.specs.opticsRole !== "corrector" || row.slug === correctorRow.slug) continue;
-      const end = { ...rowToSolverPart(row), rear: null, lengthMm: 0 };
-      if (solveTrain({ optics: scope, camera: end, parts, maxSolutions: 1, maxParts: 6 }).status !== "ok") continue;
+      if (solveLink(telescopeRow, row, parts).status !== "ok") continue;
       correctors.push(buildOptics(telescopeRow, row, tolerance).optics);
     }
   }
