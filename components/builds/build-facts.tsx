@@ -2,13 +2,15 @@ import { landsInside, signedMm } from "@/lib/builds/train";
 import { formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import type { PlanResponse } from "@/lib/planner/api-types";
+import { focuserLoad } from "@/lib/planner/load";
 import type { Chain } from "@/lib/solver/types";
 
 /** The numbers an expert checks first: where the sensor lands against the window, and the optics. */
 export function BuildFacts({ result, chain, stale = false }: { result: PlanResponse; chain: Chain; stale?: boolean }) {
   const ctx = result.context;
   const inside = landsInside(chain, result.toleranceMm);
-  const weight = chain.steps.reduce((g, s) => g + (ctx.items[s.partId]?.weightG ?? 0), 0);
+  const load = focuserLoad(result, chain);
+  const weight = load.grams;
   const facts: { label: string; value: string; note?: string; tone?: "ok" | "bad" }[] = [
     {
       label: "Sensor lands at", value: formatMm(chain.sensorDistanceMm, 2),
@@ -22,7 +24,11 @@ export function BuildFacts({ result, chain, stale = false }: { result: PlanRespo
     { label: "Connecting parts", value: String(chain.partCount), note: chain.partCount === 0 ? "the items mate directly" : undefined },
     ...(ctx.focalLengthMm ? [{ label: "Focal length", value: formatMm(ctx.focalLengthMm, 0), note: ctx.focalRatio ? `f/${ctx.focalRatio.toFixed(1)}` : undefined }] : []),
     ...(ctx.plateScaleArcsecPerPx ? [{ label: "Image scale", value: `${ctx.plateScaleArcsecPerPx.toFixed(2)}″/px`, note: ctx.fieldOfViewDeg ? `field ${ctx.fieldOfViewDeg.width.toFixed(2)}° × ${ctx.fieldOfViewDeg.height.toFixed(2)}°` : undefined }] : []),
-    ...(weight > 0 ? [{ label: "Weight behind the optics", value: formatGrams(weight), note: ctx.maxLoadG ? `focuser rated ${formatGrams(ctx.maxLoadG)}` : undefined }] : []),
+    ...(weight > 0 ? [{
+      label: "Load on the focuser", value: `${load.unknown ? "≥ " : ""}${formatGrams(weight)}`,
+      note: ctx.maxLoadG ? `of ${formatGrams(ctx.maxLoadG)} rated${ctx.telescopeId ? ", corrector included" : ""}` : undefined,
+      tone: load.over ? "bad" as const : undefined,
+    }] : []),
   ];
   return (
     <dl className="grid grid-cols-2 gap-px overflow-hidden rounded-lg border border-line bg-line sm:grid-cols-3 lg:grid-cols-6">

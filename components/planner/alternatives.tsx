@@ -5,6 +5,7 @@ import type { Chain } from "@/lib/solver";
 import { formatPrice } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
+import type { PlanChain } from "@/lib/planner/geometry";
 import { signed } from "./train-model";
 
 function connectors(chain: Chain, names: (id: string) => string): string {
@@ -14,13 +15,31 @@ function connectors(chain: Chain, names: (id: string) => string): string {
   return [...counts].map(([id, n]) => `${n > 1 ? `${n} × ` : ""}${names(id)}`).join(" + ");
 }
 
+/** "Same train, other makers": the variants of one geometry, the ones made of parts you own marked. */
+function Variants({ chain, names }: { chain: PlanChain; names: (id: string) => string }) {
+  const variants = chain.variants ?? [];
+  if (!variants.length) return null;
+  const ownsAll = (c: Chain) => c.steps.some((s) => s.role === "connector") && c.steps.every((s) => s.role !== "connector" || s.partId.endsWith("~owned"));
+  return (
+    <span className="mt-1.5 block border-t border-line/70 pt-1.5 text-xs text-muted" data-testid="variants">
+      <span className="font-medium text-text">Same train, other makers:</span>
+      {variants.map((v, i) => (
+        <span key={i} className="block">
+          {connectors(v, names)}{v.priceCents !== null ? ` · ${v.priceCents === 0 ? "nothing to buy" : formatPrice(v.priceCents)}` : ""}
+          {ownsAll(v) ? <span className="ml-1.5 rounded bg-ok/15 px-1 font-medium text-ok">you own these</span> : null}
+        </span>
+      ))}
+    </span>
+  );
+}
+
 export function Alternatives({ solutions, chosen, onChoose, names, unit, currency }: {
-  solutions: Chain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
+  solutions: PlanChain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
   /** A shop's currency when the answer is priced from its stock. */
   currency?: string;
 }) {
   const name = useId();
-  if (solutions.length < 2) return null;
+  if (solutions.length < 2 && !solutions[0]?.variants?.length) return null;
   // The ranking puts fewer parts first; someone completing a train from their own bench
   // often cares more about what is left to buy, so the cheapest answer is marked.
   const known = solutions.map((c) => c.priceCents ?? Infinity);
@@ -47,6 +66,7 @@ export function Alternatives({ solutions, chosen, onChoose, names, unit, currenc
               {c.warnings.length ? <span className="ml-2 text-warn">▲ {c.warnings.length} warning{c.warnings.length === 1 ? "" : "s"}</span> : null}
             </span>
             <span className="mt-1 block text-xs text-muted">{connectors(c, names)}</span>
+            <Variants chain={c} names={names} />
           </label>
         ))}
       </div>

@@ -50,3 +50,15 @@ export async function searchParts(kinds: readonly string[], q: string, signal: A
   }));
   return pages.flatMap((p) => p.items);
 }
+
+export type CorrectorJoins = { telescope: string; correctors: { slug: string; joins: boolean; adapters: number }[] };
+
+/** Which catalog correctors join this telescope (directly or through catalog adapters). */
+export function useCorrectorJoins(telescope: string | null) {
+  return useQuery({
+    queryKey: ["corrector-joins", telescope],
+    queryFn: ({ signal }) => fetchJson<CorrectorJoins>(`/api/v1/parts/${encodeURIComponent(telescope!)}/correctors`, { signal }),
+    enabled: !!telescope,
+    staleTime: 5 * 60_000,
+  });
+}

@@ -2,6 +2,7 @@
 // When nothing lands in the window: why, the nearest reachable distances, and what to change.
 import Link from "next/link";
 import type { PlanResponse } from "@/lib/planner/api-types";
+import type { Change } from "@/lib/planner/what-to-change";
 import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { itemName } from "./train-model";
@@ -22,7 +23,44 @@ function Suggestion({ children }: { children: React.ReactNode }) {
 
 const linkClass = "underline decoration-brass underline-offset-2 hover:text-ink";
 
-export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResponse; unit: LengthUnit; onRemoveStation: (index: number) => void }) {
+export type RemedyPatch = { removeStations: number[]; camera?: string; corrector?: string };
+
+function changeText(result: PlanResponse, c: Change): string {
+  const name = itemName(result, c.id);
+  if (c.kind === "remove-station") return `remove the ${name}`;
+  if (c.kind === "replace-camera") return `use the ${name} instead of the ${itemName(result, result.context.cameraId)}`;
+  return `use the ${name} as the corrector`;
+}
+
+/** The smallest changes that make the train land in the window, each one click away. */
+function Remedies({ result, unit, onApply }: { result: PlanResponse; unit: LengthUnit; onApply: (patch: RemedyPatch) => void }) {
+  const remedies = result.remedies ?? [];
+  if (!remedies.length) {
+    return <p className="mt-2" data-testid="remedies-none">No single change, nor any two changes, of your devices, camera{result.context.telescopeId ? " or corrector" : ""} to one the catalog holds makes this train land in the window.</p>;
+  }
+  const single = remedies[0].changes.length === 1;
+  return (
+    <>
+      <p className="mt-2">{single ? "Each of these makes the train land in the window:" : "No single change does it; each of these pairs does:"}</p>
+      <ul className="mt-1.5 space-y-1.5" data-testid="remedies">
+        {remedies.map((r, i) => {
+          const text = r.changes.map((c) => changeText(result, c)).join(" and ");
+          const patch: RemedyPatch = { removeStations: r.changes.filter((c) => c.kind === "remove-station").map((c) => (c as { index: number }).index) };
+          for (const c of r.changes) { if (c.kind === "replace-camera") patch.camera = c.id; if (c.kind === "replace-corrector") patch.corrector = c.id; }
+          return (
+            <Suggestion key={i}>
+              {text[0].toUpperCase() + text.slice(1)}: the sensor lands at <span className="num">{formatLength(r.sensorDistanceMm, unit)}</span>
+              {" "}with {r.partCount} connecting part{r.partCount === 1 ? "" : "s"}.{" "}
+              <button type="button" className={linkClass} onClick={() => onApply(patch)}>Do that</button>
+            </Suggestion>
+          );
+        })}
+      </ul>
+    </>
+  );
+}
+
+export function NoSolution({ result, unit, onApply }: { result: PlanResponse; unit: LengthUnit; onApply: (patch: RemedyPatch) => void }) {
   const L = (mm: number) => formatLength(mm, unit);
   /** Finer, for windows and gaps that are fractions of a millimetre. */
   const F = (mm: number) => (unit === "in" ? formatLength(mm, "in") : `${mm.toFixed(2)} mm`);
@@ -30,7 +68,6 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
   const ctx = result.context;
   const shortest = result.shortest;
   const firstJoint = shortest?.steps[0]?.joint.interface ?? ctx.items[ctx.opticsId]?.rear?.interface;
-  const camera = ctx.items[ctx.cameraId];
 
   let body: React.ReactNode = null;
   if (result.status === "too-long" && T !== null && shortest) {
@@ -38,21 +75,7 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
     body = (
       <>
         <p>The shortest chain that joins everything is already <strong className="num">{L(shortest.sensorDistanceMm)}</strong>, <strong className="num text-bad">{F(over)}</strong> past the far edge of the window ({F(T + tol)}).</p>
-        <ul className="mt-2 space-y-1.5">
-          {ctx.stationIds.map((id, i) => {
-            const len = ctx.items[id]?.lengthMm ?? 0;
-            return (
-              <Suggestion key={`${id}-${i}`}>
-                Remove the {itemName(result, id)} ({L(len)}){len >= over ? " — that alone makes room" : " — not enough alone"}.{" "}
-                <button type="button" className={linkClass} onClick={() => onRemoveStation(i)}>Remove it</button>
-              </Suggestion>
-            );
-          })}
-          {camera ? (
-            <Suggestion>Use a camera with less depth: at most <strong className="num">{L(Math.max(0, camera.lengthMm - over))}</strong> from its front to the sensor instead of {L(camera.lengthMm)}. <Link className={linkClass} href="/parts?kind=camera">Browse cameras</Link></Suggestion>
-          ) : null}
-          <Suggestion>Or a corrector with a longer back focus than {L(T - result.filterShiftMm)}.</Suggestion>
-        </ul>
+        <Remedies result={result} unit={unit} onApply={onApply} />
       </>
     );
   } else if (result.status === "out-of-reach" && T !== null) {
@@ -70,8 +93,25 @@ export function NoSolution({ result, unit, onRemoveStation }: { result: PlanResp
             </Suggestion>
           ) : null}
           {above !== null ? <Suggestion>The nearest above lands at <strong className="num">{F(above)}</strong>, <strong className="num">{F(above - T)}</strong> too far: a thinner part in it would have to save that much.</Suggestion> : null}
+          {result.remedies?.length ? <li><Remedies result={result} unit={unit} onApply={onApply} /></li> : null}
           {result.context.source === "owned" ? <Suggestion>Let the planner use the whole catalog as well as what you own.</Suggestion> : null}
           <Suggestion>A tolerance override wider than ±{F(tol)} also counts nearer chains — only if the corrector&apos;s maker allows it.</Suggestion>
+        </ul>
+      </>
+    );
+  } else if (result.missingJoint) {
+    const mj = result.missingJoint;
+    const codes = [mj.sky?.interface, mj.sensor?.interface].filter((c): c is string => !!c);
+    body = (
+      <>
+        <p>Between the {itemName(result, mj.skyId)} and the {itemName(result, mj.sensorId)} the train needs {mj.needed ?? "an adapter"}.</p>
+        <ul className="mt-2 space-y-1.5">
+          {mj.adapterIds.length ? mj.adapterIds.slice(0, 3).map((id) => (
+            <Suggestion key={id}><Link className={linkClass} href={`/parts/${id}`}>{itemName(result, id)}</Link> joins them.</Suggestion>
+          )) : <Suggestion>There is none in the catalog. Choose a corrector made for this telescope&apos;s focuser, or <Link className={linkClass} href="/parts/submit">submit the adapter</Link> if you know one.</Suggestion>}
+          {codes.map((code) => (
+            <Suggestion key={code}><Link className={linkClass} href={`/parts?interface=${encodeURIComponent(code)}`}>Parts with <span className="code">{interfaceLabel(code)}</span></Link></Suggestion>
+          ))}
         </ul>
       </>
     );

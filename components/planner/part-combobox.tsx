@@ -20,6 +20,8 @@ type Props = {
   onPick: (p: ApiPart) => void;
   autoFocus?: boolean;
   hint?: string;
+  /** A mark for some answers (e.g. "joins your telescope"); marked answers are listed first. */
+  mark?: (p: ApiPart) => { text: string; first: boolean } | null;
 };
 
 export function roleOf(p: ApiPart): string {
@@ -32,7 +34,7 @@ export function facesText(p: Pick<ApiPart, "front" | "rear">): string {
   return `${face(p.front)} → ${face(p.rear)}`;
 }
 
-export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFocus, hint }: Props) {
+export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFocus, hint, mark }: Props) {
   const id = useId();
   const listId = `${id}-list`;
   const queryClient = useQueryClient();
@@ -51,8 +53,11 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
   });
   const options = useMemo(() => {
     const all = query.data ?? [];
-    return (accept ? all.filter(accept) : all).slice(0, 40);
-  }, [query.data, accept]);
+    const kept = accept ? all.filter(accept) : all;
+    // Stable: marked answers first, each group in the catalog's own order.
+    const sorted = mark ? [...kept.filter((p) => mark(p)?.first), ...kept.filter((p) => !mark(p)?.first)] : kept;
+    return sorted.slice(0, 40);
+  }, [query.data, accept, mark]);
   const activeIndex = Math.min(active, options.length - 1);
 
   function pick(p: ApiPart) {
@@ -121,6 +126,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
                 className={`cursor-pointer px-3 py-2 text-sm ${i === activeIndex ? "bg-sunken shadow-[inset_3px_0_0_var(--c-brass)]" : ""}`}
               >
                 <span className="block font-medium text-ink">{p.name}</span>
+                {mark?.(p) ? <span data-testid="option-mark" className={`mt-0.5 block text-xs font-medium ${mark(p)!.first ? "text-ok" : "text-muted"}`}>{mark(p)!.first ? "✓ " : "✕ "}{mark(p)!.text}</span> : null}
                 <span className="mt-0.5 flex flex-wrap gap-x-3 text-xs text-muted">
                   <span>{roleOf(p)}</span>
                   <span className="code">{facesText(p)}</span>

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { formatPrice } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
+import type { MissingJoint } from "@/lib/planner/join-plan";
 import type { Train } from "./train-model";
 
 type Line = { id: string; slug: string; name: string; count: number; lengthMm: number; priceCents: number | null; owned: boolean };
@@ -22,17 +23,32 @@ export function shoppingLines(train: Train): Line[] {
   return [...lines.values()];
 }
 
-export function PartsList({ train, unit, owned, currency }: { train: Train; unit: LengthUnit; owned: boolean; currency?: string }) {
+function MissingLine({ missing, names }: { missing: MissingJoint; names: (id: string) => string }) {
+  return (
+    <p role="note" className="mb-3 rounded-md border border-bad/50 bg-bad/5 px-3 py-2 text-sm text-text">
+      <strong className="text-bad">▲ Not a complete train:</strong> between the telescope and the corrector it needs {missing.needed ?? "an adapter"}
+      {missing.adapterIds.length
+        ? <>; the catalog has {missing.adapterIds.slice(0, 3).map((id, i) => <span key={id}>{i ? "; " : ""}<Link href={`/parts/${id}`} className="underline decoration-brass underline-offset-2">{names(id)}</Link></span>)}.</>
+        : <> — there is none in the catalog, so this list cannot make the train work.</>}
+    </p>
+  );
+}
+
+export function PartsList({ train, unit, owned, currency, missing = null, names = (id) => id }: {
+  train: Train; unit: LengthUnit; owned: boolean; currency?: string; missing?: MissingJoint | null; names?: (id: string) => string;
+}) {
   // A shop's answer carries the shop's prices in its currency; otherwise catalog list prices.
   const price = (cents: number) => (currency ? formatMoney(cents, currency) : formatPrice(cents));
+  const note = missing ? <MissingLine missing={missing} names={names} /> : null;
   const lines = shoppingLines(train);
   const buy = lines.filter((l) => !l.owned);
   const own = lines.filter((l) => l.owned);
   const known = buy.filter((l) => l.priceCents !== null);
   const total = known.reduce((s, l) => s + l.priceCents! * l.count, 0);
   const unknown = buy.length - known.length;
-  if (!lines.length) return <p className="text-sm text-muted">No connecting parts: your chosen parts join directly.</p>;
+  if (!lines.length) return <>{note}<p className="text-sm text-muted">No connecting parts: your chosen parts join directly{missing ? " behind the corrector" : ""}.</p></>;
   return (
+    <>{note}
     <div className="grid gap-4 md:grid-cols-2">
       <div>
         <h4 className="mb-1.5 text-xs font-semibold uppercase tracking-wide text-muted">To buy</h4>
@@ -66,5 +82,6 @@ export function PartsList({ train, unit, owned, currency }: { train: Train; unit
         ) : <p className="text-sm text-muted">{owned ? <>None of your own connectors fit this chain. <Link href="/account/gear" className="text-text underline decoration-brass underline-offset-2">Your parts list</Link></> : currency ? "Drawing from the shop’s stock only. Tick “Count what I own first” to use your own parts too." : "Drawing from the whole catalog. Choose “What I own, then the catalog” to count your own parts as free."}</p>}
       </div>
     </div>
+    </>
   );
 }

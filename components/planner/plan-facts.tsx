@@ -1,25 +1,16 @@
 "use client";
 // What the optics and camera make of the sky, and the warnings on the chosen chain, in words with numbers.
 import type { Chain } from "@/lib/solver";
-import type { PlanContext } from "@/lib/planner/api-types";
+import type { PlanResponse } from "@/lib/planner/api-types";
+import { focuserLoad } from "@/lib/planner/load";
 import { formatGrams } from "@/lib/format";
-import type { Train } from "./train-model";
 
 function angle(deg: number): string {
   return deg >= 1 ? `${deg.toFixed(2)}°` : `${(deg * 60).toFixed(1)}′`;
 }
 
-/** What hangs from the optics: every item behind the telescope (corrector included). */
-export function trainWeight(train: Train): { grams: number; unknown: number } {
-  let grams = 0, unknown = 0;
-  for (const it of train.items) {
-    if (it.role === "telescope" || (it.role === "optics" && !train.items.some((t) => t.role === "telescope"))) continue;
-    if (typeof it.item?.weightG === "number") grams += it.item.weightG; else unknown++;
-  }
-  return { grams, unknown };
-}
-
-export function OpticsFacts({ ctx, train }: { ctx: PlanContext; train: Train }) {
+export function OpticsFacts({ result, chain }: { result: PlanResponse; chain: Chain | null }) {
+  const ctx = result.context;
   const rows: [string, React.ReactNode, string?][] = [];
   if (ctx.focalLengthMm) rows.push(["Focal length", `${Math.round(ctx.focalLengthMm)} mm${ctx.focalRatio ? ` · f/${ctx.focalRatio.toFixed(1)}` : ""}`, ctx.telescopeId ? "with the corrector's factor" : undefined]);
   if (ctx.plateScaleArcsecPerPx) rows.push(["Plate scale", `${ctx.plateScaleArcsecPerPx.toFixed(2)}″ per pixel`, ctx.pixelSizeUm ? `${ctx.pixelSizeUm} µm pixels` : undefined]);
@@ -30,9 +21,9 @@ export function OpticsFacts({ ctx, train }: { ctx: PlanContext; train: Train }) 
     rows.push(["Sensor / image circle", <span key="c" className={over ? "text-warn" : ""}>{ctx.sensorDiagonalMm.toFixed(1)} mm{ctx.imageCircleMm ? ` in ${ctx.imageCircleMm} mm` : ""}</span>,
       ctx.imageCircleMm ? over ? "corners fall outside the corrected field" : "the corrected field covers the sensor" : "corrected field not published"]);
   }
-  const w = trainWeight(train);
+  const w = focuserLoad(result, chain);
   if (ctx.maxLoadG) {
-    const over = w.grams > ctx.maxLoadG;
+    const over = w.over;
     rows.push(["Load on the focuser", <span key="l" className={over ? "font-semibold text-bad" : ""}>{w.unknown ? "≥ " : ""}{formatGrams(w.grams)} of {formatGrams(ctx.maxLoadG)}</span>,
       w.unknown ? `${w.unknown} part${w.unknown === 1 ? "" : "s"} without a published weight` : undefined]);
   }

@@ -2,10 +2,12 @@
 // The right column: verdict, diagram, budget strip, steps, warnings, alternatives, parts and cautions.
 import { useMemo, type ReactNode } from "react";
 import type { PlanResponse } from "@/lib/planner/api-types";
+import type { PlanChain } from "@/lib/planner/geometry";
 import type { PlanState, SolveApiRequest } from "@/lib/planner/url-state";
 import { SafetyNote } from "@/components/safety-note";
 import { Alternatives } from "./alternatives";
 import { BudgetStrip } from "./budget-strip";
+import { FilterPromptNote } from "./filter-prompt";
 import { NoSolution } from "./no-solution";
 import { PartsList, shoppingLines } from "./parts-list";
 import { WhereToBuyPanel } from "@/components/shops/where-to-buy-panel";
@@ -48,6 +50,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
   return (
     <div className="space-y-4">
       <Verdict result={result} chain={chain} index={index} unit={unit} onUnit={(u) => update({ unit: u })} />
+      <FilterPromptNote result={result} glass={state.filter ?? state.extraGlass} onCount={(g) => update({ filter: g })} />
       {load ? (
         <div role="alert" className="rounded-lg border-2 border-bad/60 bg-bad/5 p-4 text-sm">
           <p className="font-semibold text-bad">▲ Heavier than the focuser is rated for</p>
@@ -55,15 +58,18 @@ export function PlanResults({ result, state, update, request, renderActions }: {
           <div className="mt-2"><SafetyNote /></div>
         </div>
       ) : null}
-      {result.status !== "ok" ? <NoSolution result={result} unit={unit} onRemoveStation={(i) => update({ stations: state.stations.filter((_, j) => j !== i) })} /> : null}
+      {result.status !== "ok" ? <NoSolution result={result} unit={unit} onApply={(patch) => update({
+        stations: state.stations.filter((_, j) => !patch.removeStations.includes(j)),
+        ...(patch.camera ? { camera: patch.camera } : {}), ...(patch.corrector ? { corrector: patch.corrector } : {}),
+      })} /> : null}
       {renderActions && isSolution ? <div className="flex flex-wrap gap-2">{renderActions({ request, solutionIndex: index, result })}</div> : null}
 
-      <Section id="plan-diagram" title="The train" aside={isSolution ? null : chain ? "The shortest connection — it misses the window" : "Not connected"}>
+      <Section id="plan-diagram" title="The train" aside={isSolution ? null : result.missingJoint ? "Missing a joint between the telescope and the corrector" : result.nearestChain ? "The nearest reachable chain — it misses the window" : chain ? "The shortest connection — it misses the window" : "Not connected"}>
         <TrainDiagram train={train} unit={unit} label={diagramLabel} warnings={warnedParts} />
       </Section>
 
       {chain ? (
-        <Section id="plan-budget" title="Back focus budget" aside={result.targetMm === null ? "no back focus set by these optics" : `${result.solutions.length ? "chosen chain" : "shortest chain"}, to scale`}>
+        <Section id="plan-budget" title="Back focus budget" aside={result.targetMm === null ? "no back focus set by these optics" : `${result.solutions.length ? "chosen chain" : result.nearestChain ? "nearest reachable chain" : "shortest chain"}, to scale`}>
           <BudgetStrip chain={chain} names={names} targetMm={result.targetMm} toleranceMm={result.toleranceMm}
             filterShiftMm={result.filterShiftMm} nearest={result.status === "ok" ? null : result.nearest} unit={unit} />
         </Section>
@@ -75,20 +81,25 @@ export function PlanResults({ result, state, update, request, renderActions }: {
 
       <Section id="plan-checks" title="Checks and numbers">
         <div className="space-y-3">
+          {result.missingJoint ? (
+            <p role="alert" className="rounded-md border border-bad/50 bg-bad/5 px-3 py-2 text-sm text-text">
+              <span className="font-semibold text-bad">▲ Missing joint · telescope → corrector</span><br />{result.missingJoint.detail}
+            </p>
+          ) : null}
           <ChainWarnings chain={chain} names={names} />
-          <OpticsFacts ctx={result.context} train={train} />
+          <OpticsFacts result={result} chain={chain} />
         </div>
       </Section>
 
-      {result.solutions.length > 1 ? (
+      {result.solutions.length > 1 || (result.solutions[0] as PlanChain | undefined)?.variants?.length ? (
         <Section id="plan-alts" title="Alternatives" aside={`${result.solutions.length} that land in the window, best first`}>
           <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} currency={result.context.shop?.currency} />
         </Section>
       ) : null}
 
       {chain ? (
-        <Section id="plan-parts" title="Parts" aside={result.context.shop ? `${result.context.shop.name}'s prices` : result.context.source === "owned" ? "your parts count as free" : "list prices"}>
-          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} currency={result.context.shop?.currency} />
+        <Section id="plan-parts" title="Parts" aside={result.missingJoint ? "incomplete: a joint is missing" : result.context.shop ? `${result.context.shop.name}'s prices` : result.context.source === "owned" ? "your parts count as free" : "list prices"}>
+          <PartsList train={train} unit={unit} owned={result.context.source === "owned"} currency={result.context.shop?.currency} missing={result.missingJoint ?? null} names={names} />
         </Section>
       ) : null}
 

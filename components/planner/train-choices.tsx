@@ -1,10 +1,10 @@
 "use client";
 // The left column: the train's choices as a vertical rail, sky at the top, sensor at the bottom.
-import { useState, type ReactNode } from "react";
+import { useCallback, useState, type ReactNode } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
 import type { PlanState } from "@/lib/planner/url-state";
 import { MAX_STATIONS } from "@/lib/planner/url-state";
-import { usePart } from "./api";
+import { useCorrectorJoins, usePart } from "./api";
 import { ChosenPart, SmallButton } from "./chosen-part";
 import { PartCombobox } from "./part-combobox";
 
@@ -29,8 +29,9 @@ function Stop({ title, tone, children, aside }: { title: string; tone: "glass" |
   );
 }
 
-function PickOrShow({ slug, label, kinds, accept, onPick, onClear, tone, placeholder, hint, clearLabel }: {
+function PickOrShow({ slug, label, kinds, accept, mark, onPick, onClear, tone, placeholder, hint, clearLabel }: {
   slug: string | null; label: string; kinds: readonly string[]; accept?: (p: ApiPart) => boolean; onPick: (p: ApiPart) => void;
+  mark?: (p: ApiPart) => { text: string; first: boolean } | null;
   onClear: () => void; tone?: "glass" | "plain"; placeholder?: string; hint?: string; clearLabel: string;
 }) {
   const [changing, setChanging] = useState(false);
@@ -42,7 +43,7 @@ function PickOrShow({ slug, label, kinds, accept, onPick, onClear, tone, placeho
   }
   return (
     <div className="space-y-1.5">
-      <PartCombobox label={label} kinds={kinds} accept={accept} placeholder={placeholder} hint={hint} autoFocus={changing}
+      <PartCombobox label={label} kinds={kinds} accept={accept} mark={mark} placeholder={placeholder} hint={hint} autoFocus={changing}
         onPick={(p) => { setChanging(false); onPick(p); }} />
       {changing ? <button type="button" className="text-xs text-muted underline underline-offset-2" onClick={() => setChanging(false)}>Keep the current one</button> : null}
     </div>
@@ -52,6 +53,13 @@ function PickOrShow({ slug, label, kinds, accept, onPick, onClear, tone, placeho
 export function TrainChoices({ state, update }: { state: PlanState; update: Update }) {
   const optics = usePart(state.optics);
   const telescope = opticsRole(optics.data) === "telescope";
+  const joins = useCorrectorJoins(telescope ? state.optics : null);
+  const markCorrector = useCallback((p: ApiPart) => {
+    const j = joins.data?.correctors.find((c) => c.slug === p.slug);
+    if (!j) return null;
+    if (!j.joins) return { text: "does not join this telescope", first: false };
+    return { text: j.adapters === 0 ? "fits this telescope directly" : `fits this telescope with ${j.adapters} adapter${j.adapters === 1 ? "" : "s"}`, first: true };
+  }, [joins.data]);
   const move = (i: number, d: -1 | 1) => {
     const s = [...state.stations];
     [s[i], s[i + d]] = [s[i + d], s[i]];
@@ -69,7 +77,7 @@ export function TrainChoices({ state, update }: { state: PlanState; update: Upda
       </Stop>
       {telescope ? (
         <Stop title="Corrector" tone="glass" aside="optional">
-          <PickOrShow slug={state.corrector} label="Corrector" kinds={["optics"]} accept={isCorrector} tone="glass" clearLabel="Remove the corrector"
+          <PickOrShow slug={state.corrector} label="Corrector" kinds={["optics"]} accept={isCorrector} mark={markCorrector} tone="glass" clearLabel="Remove the corrector"
             placeholder="Flattener, reducer, coma corrector…"
             hint="Without one, any connection counts: a plain telescope has no back focus to hit."
             onPick={(p) => update({ corrector: p.slug })} onClear={() => update({ corrector: null })} />

@@ -105,13 +105,13 @@ export function buildTrain(result: PlanResponse, chain: Chain | null): Train {
   return { items, joints, connected };
 }
 
-/** The chain to show: the chosen solution, else the shortest connection. */
+/** The chain to show: the chosen solution, else the nearest reachable chain, else the shortest connection. */
 export function shownChain(result: PlanResponse, alt: number): { chain: Chain | null; index: number; isSolution: boolean } {
   if (result.solutions.length) {
     const index = Math.min(Math.max(0, alt), result.solutions.length - 1);
     return { chain: result.solutions[index], index, isSolution: true };
   }
-  return { chain: result.shortest, index: 0, isSolution: false };
+  return { chain: result.nearestChain ?? result.shortest, index: 0, isSolution: false };
 }
 
 export function genderSign(g: Gender | null): string {

@@ -44,7 +44,12 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         </div>
       </div>
       <p className="mt-2 text-lg leading-snug text-text sm:text-xl" aria-live="polite">
-        {result.status === "out-of-reach" && T !== null && result.nearest ? (
+        {result.missingJoint ? (
+          <>
+            <span className="font-semibold text-bad">The telescope does not join the corrector.</span>{" "}
+            <span className="text-base text-text">{result.missingJoint.detail}</span>
+          </>
+        ) : result.status === "out-of-reach" && T !== null && result.nearest ? (
           <>
             Closest reachable{" "}
             {result.nearest.belowMm !== null ? <><Big mm={result.nearest.belowMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.belowMm - T) / 25.4 : result.nearest.belowMm - T, unit === "in" ? 3 : 2)})</span></> : null}
@@ -74,6 +79,11 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
           {toBuy !== null && toBuy !== undefined ? ` · ${toBuy === 0 ? "nothing to buy" : result.context.shop ? `${formatMoney(toBuy, result.context.shop.currency)} at ${result.context.shop.name}` : `${formatPrice(toBuy)} at list prices`}` : " · some prices unknown"}
           {result.solutions.length > 1 ? ` · alternative ${index + 1} of ${result.solutions.length}` : ""}
           {chain.warnings.length ? <> · <a href="#plan-checks" className="text-warn underline underline-offset-2">▲ {chain.warnings.length} warning{chain.warnings.length === 1 ? "" : "s"}</a></> : null}
+        </p>
+      ) : result.missingJoint && chain ? (
+        <p className="num mt-1 text-sm text-muted">
+          Behind the corrector the train would {result.rearStatus === "ok" ? "reach" : "still miss"} focus
+          {T !== null ? <> (sensor at {chain.sensorDistanceMm.toFixed(2)} mm for {T.toFixed(2)} mm)</> : null}, once the joint in front is closed.
         </p>
       ) : result.reason && chain ? <p className="mt-1 text-sm text-text">{result.reason}</p> : null}
     </div>

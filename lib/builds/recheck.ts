@@ -9,7 +9,7 @@ import { enqueueRechecks } from "@/lib/jobs/queue";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import { runPlan, type PlanInput } from "@/lib/planner/run-plan";
 import type { Chain, Part } from "@/lib/solver/types";
-import { chosenChain, connectorKey, itemOf, stripOwned } from "./chain";
+import { chosenChain, chosenTelescopeLink, connectorKey, itemOf, stripOwned } from "./chain";
 
 type Verdict = { fits: boolean; reason: string; catalogVersion: number | null };
 const mm = (v: number) => `${v.toFixed(1)} mm`;
@@ -55,10 +55,16 @@ export async function checkBuild(build: BuildRow): Promise<Verdict> {
   if (!chain) return { fits: false, reason: "The saved result has no chain to check.", catalogVersion: null };
   const request = build.request as PlanInput;
   const connectorIds = chain.steps.filter((s) => s.role === "connector").map((s) => s.partId);
-  const rows = new Map((await getApprovedPartsByRefs({ refs: [...new Set(chain.steps.map((s) => stripOwned(s.partId)))] })).map((r) => [r.slug, r]));
+  const linkIds = (chosenTelescopeLink(saved)?.steps ?? []).map((s) => s.partId);
+  const rows = new Map((await getApprovedPartsByRefs({ refs: [...new Set([...chain.steps.map((s) => s.partId), ...linkIds].map(stripOwned))] })).map((r) => [r.slug, r]));
 
   const counts = new Map<string, number>();
   for (const id of connectorIds) counts.set(id, (counts.get(id) ?? 0) + 1);
+  // The telescope → corrector link's adapters too: without them the plan would not join (join-plan.ts).
+  // Each link is solved on its own, so a part needs as many as the link that uses it most.
+  const inLink = new Map<string, number>();
+  for (const s of chosenTelescopeLink(saved)?.steps ?? []) if (s.role === "connector") inLink.set(s.partId, (inLink.get(s.partId) ?? 0) + 1);
+  for (const [id, n] of inLink) counts.set(id, Math.max(counts.get(id) ?? 0, n));
   const parts: Part[] = [];
   for (const [id, quantity] of counts) {
     const row = rows.get(stripOwned(id));

@@ -33,6 +33,7 @@ export function rowToPlanItem(r: PartRowLike, opts: { owned?: boolean } = {}): P
     kind: r.kind, front: port(r.frontInterface, r.frontGender), rear: port(r.rearInterface, r.rearGender),
     lengthMm: r.lengthMm, adjustMm: r.adjustMm, clearApertureMm: r.clearApertureMm, weightG: r.weightG,
     priceCents: opts.owned ? 0 : r.listPriceCents, owned: !!opts.owned,
+    ...(typeof r.specs?.filterThicknessMm === "number" ? { filterThicknessMm: r.specs.filterThicknessMm } : {}),
   };
 }
 

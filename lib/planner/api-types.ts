@@ -1,6 +1,8 @@
 // The JSON that POST /api/v1/solve answers when called with catalog references: the
 // solver's SolveResult (SOLVER.md) plus what a page needs to draw and explain it.
-import type { SolveResult } from "@/lib/solver";
+import type { Chain, SolveResult } from "@/lib/solver";
+import type { MissingJoint } from "./join-plan";
+import type { Remedy } from "./what-to-change";
 
 export type PlanItem = {
   /** The id used in the solver's steps (catalog slug; owned copies end in "~owned"). */
@@ -19,6 +21,8 @@ export type PlanItem = {
   /** Price the solver counted: 0 for owned parts, the list price for catalog parts, null when unknown. */
   priceCents: number | null;
   owned: boolean;
+  /** Filter wheels and drawers: the filter thickness their spec says they hold. */
+  filterThicknessMm?: number;
 };
 
 export type PlanContext = {
@@ -51,4 +55,15 @@ export type PlanResponse = SolveResult & {
   context: PlanContext;
   /** Telescope → corrector connection (no back focus), when a telescope and a corrector are both chosen. */
   telescopeLink: SolveResult | null;
+  /**
+   * Set when the telescope cannot join its corrector: the plan is then "no-connection" as a
+   * whole, `solutions` is empty and `shortest` is the best train behind the corrector.
+   */
+  missingJoint?: MissingJoint | null;
+  /** When nothing lands in the window: the smallest sets of changes (one, else two) that make it land. */
+  remedies?: Remedy[];
+  /** When nothing lands in the window: the chain that reaches the nearer of the nearest distances. */
+  nearestChain?: Chain | null;
+  /** Status of the corrector → camera side alone (equal to `status` unless a joint in front is missing). */
+  rearStatus?: SolveResult["status"];
 };

@@ -7,9 +7,15 @@ import {
   CONNECTOR_KINDS, buildCamera, buildOptics, derivedNumbers, rowToPlanItem, rowToSolverPart,
 } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
-import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
+import { DEFAULT_MAX_SOLUTIONS, solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import { shopStockSource } from "@/lib/shops/stock-source";
 import type { PlanItem, PlanResponse } from "./api-types";
+import { groupByGeometry, type PlanChain } from "./geometry";
+import { byPartsThenDetours, countDetours } from "./detours";
+import { joinPlan } from "./join-plan";
+import { linkEnds, solveLink } from "./telescope-link";
+import { nearestChain } from "./nearest-chain";
+import { whatToChange } from "./what-to-change";
 
 type Ref = { partId: string };
 const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
@@ -31,7 +37,7 @@ export type PlanInput = {
 // graph cache (keyed by this array) is reused across requests.
 let catalogCache: { version: number; rows: Map<string, PartRow>; connectors: Part[] } | null = null;
 
-async function catalogConnectors() {
+export async function catalogConnectors() {
   const version = await getCatalogVersion();
   if (!catalogCache || catalogCache.version !== version) {
     const rows = await listAllApprovedParts();
@@ -60,7 +66,8 @@ async function resolveRefs(input: PlanInput) {
 
 function collectIds(result: SolveResult | null, into: Set<string>) {
   if (!result) return;
-  for (const chain of [result.shortest, ...result.solutions]) for (const s of chain?.steps ?? []) into.add(s.partId);
+  const variants = result.solutions.flatMap((c) => (c as PlanChain).variants ?? []);
+  for (const chain of [result.shortest, ...result.solutions, ...variants]) for (const s of chain?.steps ?? []) into.add(s.partId);
 }
 
 /** Solve a plan whose items may be catalog references; inline-only requests are solved as they are. */
@@ -127,15 +134,23 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     return rowToSolverPart(row);
   });
 
-  const result = solveTrain({ ...base, optics, camera, stations, parts });
-  await shopStock?.record(result, (more) => solveTrain({ ...base, optics, camera, stations, parts: more }));
+  const request: SolveRequest = { ...base, optics, camera, stations, parts };
+  // Ask for more multisets than will be shown, so other makers' copies of a chain become its
+  // variants instead of filling the list of alternatives (geometry.ts).
+  const wanted = input.maxSolutions ?? DEFAULT_MAX_SOLUTIONS;
+  const pooled = solveTrain({ ...request, maxSolutions: Math.min(50, wanted * 4) });
+  const shapes = new Map<string, Part>([...parts, ...stations].map((p) => [p.id, p]));
+  const ranked = byPartsThenDetours(pooled.solutions).map((c) => ({ ...c, detours: countDetours(c) }));
+  const result: SolveResult = { ...pooled, solutions: groupByGeometry(ranked, (id) => shapes.get(id), wanted) };
+  await shopStock?.record(result, (more) => solveTrain({ ...request, parts: more }));
+  const nearest = nearestChain(request, result);
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
     // Say it in the focuser's terms: the corrector's weight counts against the same rating.
     const rating = telescopeRow.specs.maxLoadG;
     const corrG = correctorRow.weightG ?? 0;
     let weightOf: Map<string, number> | undefined; // built only when a load warning needs it
 
-    for (const chain of [result.shortest, ...result.solutions]) {
+    for (const chain of [result.shortest, ...result.solutions, ...result.solutions.flatMap((c) => (c as PlanChain).variants ?? []), nearest]) {
       for (const w of chain?.warnings ?? []) {
         if (w.code !== "load") continue;
         weightOf ??= new Map([...parts, ...stations, camera].map((p) => [p.id, p.weightG ?? 0]));
@@ -145,16 +160,33 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     }
   }
   let telescopeLink: SolveResult | null = null;
+  let catalogLink: SolveResult | null = null;
+  let scopePart: Part | null = null, correctorPart: Part | null = null;
   if (telescopeRow && correctorRow) {
     // Telescope → corrector: any mating chain will do (no back focus on this side).
-    const scope: Optics = { ...rowToSolverPart(telescopeRow), lengthMm: 0 };
-    const corrAsEnd: Camera = { ...rowToSolverPart(correctorRow), id: `${correctorRow.slug}`, rear: null, lengthMm: 0 };
-    telescopeLink = solveTrain({ optics: scope, camera: corrAsEnd, parts, maxSolutions: 3, maxParts: 6 });
+    ({ scope: scopePart, end: correctorPart } = linkEnds(telescopeRow, correctorRow));
+    const link = (from: Part[]) => solveLink(telescopeRow!, correctorRow!, from, 3);
+    telescopeLink = link(parts);
+    // Not joined with the plan's own parts: would the catalog join it? (Said in the reason.)
+    if (telescopeLink.status !== "ok") catalogLink = parts === catalog.connectors ? telescopeLink : link(catalog.connectors);
   }
+  const joined = joinPlan({
+    rear: result, link: telescopeLink, catalogLink,
+    telescope: scopePart && telescopeRow ? { ...scopePart, name: `${telescopeRow.maker} ${telescopeRow.model}` } : null,
+    corrector: correctorPart && correctorRow ? { ...correctorPart, name: `${correctorRow.maker} ${correctorRow.model}` } : null,
+    nameOf: (id) => { const r = catalog.rows.get(id); return r ? `${r.maker} ${r.model}` : id; },
+  });
+
+  const remedies = joined.status === "too-long" || joined.status === "out-of-reach"
+    ? whatToChange({ request, ...remedyCandidates({ catalog, camera, telescopeRow, correctorRow, parts, tolerance: input.backFocusToleranceMm }) })
+    : [];
 
   const used = new Set<string>();
-  collectIds(result, used);
+  collectIds(joined, used);
+  for (const s of nearest?.steps ?? []) used.add(s.partId);
+  for (const r of remedies) for (const c of r.changes) used.add(c.id);
   collectIds(telescopeLink, used);
+  for (const id of joined.missingJoint?.adapterIds ?? []) used.add(id);
   for (const id of used) {
     if (items[id]) continue;
     const row = catalog.rows.get(id.replace(/~owned$/, ""));
@@ -163,7 +195,9 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
 
   shopStock?.priceItems(items);
   return {
-    ...result,
+    ...joined,
+    remedies,
+    nearestChain: joined.status === "out-of-reach" ? nearest : null,
     telescopeLink,
     context: {
       items,
@@ -183,4 +217,35 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
       catalogVersion: catalog.version,
     },
   };
+}
+
+type Catalog = Awaited<ReturnType<typeof catalogConnectors>>;
+
+/**
+ * What "what to change" may swap in: catalog cameras with about the same sensor or larger
+ * (one per front face and depth), and — behind a telescope only — catalog correctors that
+ * join it. An astrograph's corrector is built in, so nothing replaces it.
+ */
+function remedyCandidates({ catalog, camera, telescopeRow, correctorRow, parts, tolerance }: {
+  catalog: Catalog; camera: Camera; telescopeRow: PartRow | null; correctorRow: PartRow | null; parts: Part[]; tolerance?: number;
+}): { cameras: Camera[]; correctors: Optics[] } {
+  const diag = camera.sensorDiagonalMm ?? 0;
+  const byFace = new Map<string, Camera>();
+  for (const row of catalog.rows.values()) {
+    if (row.kind !== "camera") continue;
+    const cam = buildCamera(row);
+    if (!cam.front || (cam.sensorDiagonalMm ?? 0) < 0.8 * diag) continue;
+    const key = `${cam.front.interface}|${cam.front.gender}|${cam.lengthMm}`;
+    const prev = byFace.get(key);
+    if (!prev || Math.abs((cam.sensorDiagonalMm ?? 0) - diag) < Math.abs((prev.sensorDiagonalMm ?? 0) - diag)) byFace.set(key, cam);
+  }
+  const correctors: Optics[] = [];
+  if (telescopeRow && correctorRow) {
+    for (const row of catalog.rows.values()) {
+      if (row.kind !== "optics" || row.specs.opticsRole !== "corrector" || row.slug === correctorRow.slug) continue;
+      if (solveLink(telescopeRow, row, parts).status !== "ok") continue;
+      correctors.push(buildOptics(telescopeRow, row, tolerance).optics);
+    }
+  }
+  return { cameras: [...byFace.values()], correctors };
 }

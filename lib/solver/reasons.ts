@@ -66,9 +66,22 @@ export function noConnectionReason(p: Problem, t: Tables | null): string {
   return `No connection within ${p.maxParts} connecting parts fits the stock available.`;
 }
 
+/** Decimal places the request's tolerance was given with (0.05 → 2), at least 1, at most 3. */
+function placesOf(p: Problem): number {
+  const tol = p.tol ?? 0.5;
+  for (let d = 1; d <= 3; d++) if (Math.abs(Math.round(tol * 10 ** d) - tol * 10 ** d) < 1e-6) return d;
+  return 3;
+}
+
+/** Lengths in a window sentence, to the precision the tolerance was given with. */
+const fine = (p: Problem, x: number): string => {
+  const t = x.toFixed(placesOf(p));
+  return `${Number(t) === 0 ? (0).toFixed(placesOf(p)) : t} mm`;
+};
+
 function windowText(p: Problem): string {
-  const glass = p.filterShift > 0 ? ` (${mm(p.req.optics.backFocusMm!)} back focus + ${mm(p.filterShift)} for filter glass)` : "";
-  return `${mm(p.target!)} ± ${mm(p.tol!)}${glass}`;
+  const glass = p.filterShift > 0 ? ` (${fine(p, p.req.optics.backFocusMm!)} back focus + ${fine(p, p.filterShift)} for filter glass)` : "";
+  return `${fine(p, p.target!)} ± ${fine(p, p.tol!)}${glass}`;
 }
 
 export function tooLongReason(p: Problem, shortest: Chain): string {
@@ -82,14 +95,14 @@ export function tooLongReason(p: Problem, shortest: Chain): string {
     .filter((s) => s.lengthMm > 0)
     .map((s) => `${names.get(s.partId) ?? s.partId} (${mm(s.lengthMm)})`);
   const most = largest.length ? `; most of the length is in ${listAnd(largest)}` : "";
-  return `Even the shortest chain is ${mm(excess)} too long: it reaches ${mm(shortest.sensorDistanceMm)} against ${windowText(p)}${most}.`;
+  return `Even the shortest chain is ${fine(p, excess)} too long: it reaches ${fine(p, shortest.sensorDistanceMm)} against ${windowText(p)}${most}.`;
 }
 
 export function outOfReachReason(p: Problem, nearest: Nearest): string {
   const T = p.target!;
   const parts: string[] = [];
-  if (nearest.belowMm !== null) parts.push(`${mm(nearest.belowMm)} (${mm(T - nearest.belowMm)} short of the target)`);
-  if (nearest.aboveMm !== null) parts.push(`${mm(nearest.aboveMm)} (${mm(nearest.aboveMm - T)} beyond it)`);
+  if (nearest.belowMm !== null) parts.push(`${fine(p, nearest.belowMm)} (${fine(p, T - nearest.belowMm)} short of the target)`);
+  if (nearest.aboveMm !== null) parts.push(`${fine(p, nearest.aboveMm)} (${fine(p, nearest.aboveMm - T)} beyond it)`);
   const closest = parts.length === 2 ? `the closest reachable distances are ${parts[0]} and ${parts[1]}`
     : `the closest reachable distance is ${parts[0] ?? "unknown"}`;
   return `No combination of the available parts lands in ${windowText(p)}: ${closest}.`;

@@ -15,6 +15,19 @@ export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]):
   const D = chain.sensorDistanceMm;
 
   if (positive(N) && typeof s === "number" && s >= 0) {
+    // The optics' own rear opening (a corrector's last lens cell) is the first stop the cone
+    // passes, D from the sensor; N is the system's focal ratio (telescope × corrector factor).
+    if (typeof optics.clearApertureMm === "number") {
+      const need = requiredClearApertureMm(s, D, N);
+      if (optics.clearApertureMm < need - 1e-9) {
+        out.push({
+          code: "vignetting",
+          partId: optics.id,
+          message: `The rear of ${nameOf(optics)} clears ${mm(optics.clearApertureMm)} but needs ${mm(need)} at ${mm(D)} from the sensor ` +
+            `(a ${mm(s)} diagonal plus ${mm(D)} / f/${Number(N.toFixed(2))}), so the corners will darken.`,
+        });
+      }
+    }
     chain.steps.forEach((step, i) => {
       const ca = parts[i].clearApertureMm;
       if (typeof ca !== "number") return;

@@ -25,6 +25,8 @@ function stepDown(big: Code, small: Code): PartInput {
   return part("Tarrant Machining", {
     kind: "adapter", model: `Step-Down ${LABEL[big]} F to ${LABEL[small]} M`,
     description: `Female ${LABEL[big]} in front, male ${LABEL[small]} behind; ${len} mm.`,
+    // Not reversible: turned round, the narrow thread would face the sky and step the beam
+    // down before wider glass — the trade uses a step-up for that (common practice).
     front: F(big), rear: M(small), lengthMm: len, clearApertureMm: bore(small),
     weightG: Math.round(15 + diameter(big) * 0.6), listPriceCents: 1900 + Math.round(diameter(big)) * 30,
   });

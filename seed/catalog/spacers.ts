@@ -11,8 +11,9 @@ function spacerKit(maker: DemoMakerName, thread: Code, lengths: readonly number[
   const od = Number.parseFloat(thread.slice(1)); // M42x0.75 → 42
   return lengths.map((len) => part(maker, {
     kind: "spacer", model: `${LABEL[thread]} Spacer ${len} mm`,
-    description: len < 2 ? `Shim ring, ${len} mm, for ${LABEL[thread]} joints.` : `Extension ring, ${len} mm; female front, male rear.`,
-    front: F(thread), rear: M(thread), lengthMm: len, clearApertureMm: bore(thread),
+    description: len < 2 ? `Shim ring, ${len} mm, for ${LABEL[thread]} joints.` : `Extension ring, ${len} mm; female front, male rear, and it screws in either way round.`,
+    // A plain ring has no optical front or back: the trade mounts it either way (common practice).
+    front: F(thread), rear: M(thread), lengthMm: len, reversible: true, clearApertureMm: bore(thread),
     weightG: Math.round(2 + len * od * 0.07), listPriceCents: basePrice + Math.round(len * 45) * 10,
   }));
 }

@@ -199,16 +199,24 @@ describe("demo catalog: the trade's conventions (common practice)", () => {
     for (const s of ["1.25in", "36mm", "2in"]) expect(sizes, s).toContain(s);
   });
 
-  it("male–male couplers exist for the female-faced wheels, and reversible parts are symmetric", () => {
+  it("male–male couplers exist for the female-faced wheels, and plain rings of one thread are reversible", () => {
     for (const t of ["M42x0.75", "M48x0.75"]) {
       const c = demoCatalog.find((p) => p.front?.interface === t && p.rear?.interface === t
         && p.front.gender === "male" && p.rear.gender === "male");
       expect(c, t).toBeDefined();
       expect(c!.lengthMm).toBeLessThanOrEqual(2);
     }
+    // Plain rings of one thread (spacers, couplers) mount either way round; focusing tubes,
+    // barrels and devices do not (common practice).
+    const threaded = (port: { interface: string } | null) => !!port && getInterface(port.interface)?.kind === "thread";
     for (const p of demoCatalog.filter((x) => x.reversible)) {
-      expect(p.front, p.slug).toEqual(p.rear);
+      expect(["spacer", "adapter"], p.slug).toContain(p.kind);
+      expect(threaded(p.front) && threaded(p.rear), p.slug).toBe(true);
+      expect(p.front!.interface, p.slug).toBe(p.rear!.interface);
     }
+    for (const p of demoCatalog.filter((x) => x.kind === "spacer" && x.adjustMm === undefined)) expect(p.reversible, p.slug).toBe(true);
+    // Step rings stay one way round: reversed, the narrow thread would face the sky.
+    expect(demoCatalog.find((p) => p.model === "Step-Down M48 F to T-thread M")?.reversible).toBeFalsy();
   });
 
   it("has adjustable extensions", () => {

@@ -127,8 +127,17 @@ describe("the window", () => {
     const res = solve({ ...req, parts: [adapter48, coupler, spacer("s5", T2, 5)], optics: corrector({ backFocusMm: 52, backFocusToleranceMm: 0.25 }), filters: [] });
     expect(res.status).toBe("out-of-reach");
     expect(res.nearest).toEqual({ belowMm: 49.5, aboveMm: 54.5 });
-    expect(res.reason).toBe("No combination of the available parts lands in 52.0 mm ± 0.3 mm: the closest reachable distances are " +
-      "49.5 mm (2.5 mm short of the target) and 54.5 mm (2.5 mm beyond it).");
+    // The tolerance was given to 0.01 mm, so the sentence keeps that precision (0.25, not 0.3).
+    expect(res.reason).toBe("No combination of the available parts lands in 52.00 mm ± 0.25 mm: the closest reachable distances are " +
+      "49.50 mm (2.50 mm short of the target) and 54.50 mm (2.50 mm beyond it).");
+  });
+
+  it("keeps a ±0.05 mm tolerance and a 0.05 mm miss as given, not rounded away", () => {
+    const res = solve({ ...req, parts: [adapter48, coupler, spacer("s5", T2, 5)], optics: corrector({ backFocusMm: 49.6, backFocusToleranceMm: 0.05 }), filters: [] });
+    expect(res.status).toBe("out-of-reach");
+    expect(res.nearest!.belowMm).toBeCloseTo(49.5, 9);
+    expect(res.reason).toContain("49.60 mm ± 0.05 mm");
+    expect(res.reason).toContain("49.50 mm (0.10 mm short of the target)");
   });
 
   it("respects maxParts, and says how many parts a connection would need", () => {

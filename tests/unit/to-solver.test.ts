@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { buildOptics, CONNECTOR_KINDS } from "@/lib/catalog/to-solver";
 import type { PartRowLike } from "@/lib/catalog/rows";
+import { solveTrain } from "@/lib/solver";
 
 const row = (over: Partial<PartRowLike>): PartRowLike => ({
   id: "id", slug: "slug", kind: "optics", maker: "M", model: "X", description: null,
@@ -35,5 +36,24 @@ describe("buildOptics", () => {
 
   it("fills gaps with adapters, spacers and extensions only", () => {
     expect([...CONNECTOR_KINDS].sort()).toEqual(["adapter", "extension", "spacer"]);
+  });
+});
+
+describe("a corrector behind a telescope is checked for vignetting", () => {
+  // Requirement s + d/N (lib/optics requiredClearApertureMm, common practice).
+  const scope = row({ slug: "scope", rearInterface: "barrel-2in", rearGender: "female", specs: { opticsRole: "telescope", focalLengthMm: 480, apertureMm: 80 } });
+  const flattener = row({ slug: "flat", frontInterface: "barrel-2in", frontGender: "male", rearInterface: "M48x0.75", rearGender: "male", clearApertureMm: 44,
+    specs: { opticsRole: "corrector", backFocusMm: 55, backFocusToleranceMm: 0.5, reduction: 1, imageCircleMm: 44 } });
+  const camera = (diag: number) => ({ id: "cam", front: { interface: "M48x0.75", gender: "female" as const }, rear: null, lengthMm: 55, sensorDiagonalMm: diag });
+
+  it("uses the telescope's focal ratio times the corrector's factor at the corrector's own rear", () => {
+    const { optics } = buildOptics(scope, flattener);
+    expect(optics.focalRatio).toBeCloseTo(6, 9); // 480 × 1.0 / 80; the corrector alone has none
+    const full = solveTrain({ optics, camera: camera(43.3), parts: [] });
+    const w = full.solutions[0].warnings.find((x) => x.code === "vignetting" && x.partId === "flat");
+    expect(w?.message).toContain("needs 52.5 mm at 55.0 mm"); // 43.3 + 55/6 = 52.47
+    expect(w?.message).toContain("f/6");
+    const small = solveTrain({ optics, camera: camera(28.3), parts: [] }); // 28.3 + 9.2 = 37.5 < 44
+    expect(small.solutions[0].warnings.filter((x) => x.code === "vignetting")).toEqual([]);
   });
 });
