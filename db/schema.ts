@@ -217,3 +217,4 @@ export type BuildRow = typeof builds.$inferSelect;
 export type MailRow = typeof mailOutbox.$inferSelect;
 
 export * from "./schema-shops";
+export * from "./schema-security";

@@ -1,7 +1,8 @@
 import { notFound } from "next/navigation";
 import { listOutboxMessages } from "@/db/queries/outbox";
 import { PageTitle } from "@/components/ui/card";
-import { isMailFake } from "@/lib/mail";
+import { getSessionUser } from "@/lib/auth/session";
+import { mayReadOutbox } from "@/lib/dev/outbox-access";
 
 export const metadata = { title: "Local outbox" };
 export const dynamic = "force-dynamic";
@@ -12,7 +13,7 @@ function linkify(text: string) {
 }
 
 export default async function OutboxPage() {
-  if (!isMailFake()) notFound();
+  if (!mayReadOutbox(await getSessionUser())) notFound();
   const messages = await listOutboxMessages({ limit: 100 });
   return (
     <div className="max-w-4xl">
