@@ -7,6 +7,14 @@ import { flagshipRequest, saveBuild } from "./builds-support";
 
 const PDF = new TextEncoder().encode("%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n");
 
+/** A part submission's multipart form: a small spacer and its spec sheet. */
+function partForm(model: string, lengthMm: number, sheet: { bytes: Uint8Array; type: string; name: string } = { bytes: PDF, type: "application/pdf", name: "s.pdf" }) {
+  const form = new FormData();
+  form.set("part", JSON.stringify({ kind: "spacer", maker: "Test Bench Works", model: `${model} ${Date.now()}`, front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm }));
+  form.set("specSheet", new Blob([sheet.bytes as BlobPart], { type: sheet.type }), sheet.name);
+  return form;
+}
+
 describe("1 · the dev outbox (account takeover)", () => {
   it("is 404 for visitors and members, and readable by the admin", async () => {
     const member = await signedIn("member@trainyard.test");
@@ -127,12 +135,9 @@ describe("6 · unbounded bodies", () => {
     expect(status).toBe(413);
     expect(sent).toBeLessThan(150_000_000);
 
-    const form = new FormData();
-    form.set("part", JSON.stringify({ kind: "spacer", maker: "Test Bench Works", model: `Big ${Date.now()}`, front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm: 5 }));
     const big = new Uint8Array(10.1 * 1024 * 1024);
     big.set(PDF);
-    form.set("specSheet", new Blob([big as BlobPart], { type: "application/pdf" }), "big.pdf");
-    const res = await member.request("/api/v1/submissions", { method: "POST", body: form });
+    const res = await member.request("/api/v1/submissions", { method: "POST", body: partForm("Big", 5, { bytes: big, type: "application/pdf", name: "big.pdf" }) });
     expect(res.status).toBe(413);
     expect((await res.json()).error.fields.specSheet).toBeDefined();
   });
@@ -168,10 +173,7 @@ describe("9 · the smaller defects", () => {
 
   it("does not let a moderator approve their own submission", async () => {
     const mod = await signedIn("moderator@trainyard.test");
-    const form = new FormData();
-    form.set("part", JSON.stringify({ kind: "spacer", maker: "Test Bench Works", model: `Own ${Date.now()}`, front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm: 4 }));
-    form.set("specSheet", new Blob([PDF as BlobPart], { type: "application/pdf" }), "s.pdf");
-    const created = await (await mod.request("/api/v1/submissions", { method: "POST", body: form })).json();
+    const created = await (await mod.request("/api/v1/submissions", { method: "POST", body: partForm("Own", 4) })).json();
     const own = await mod.post(`/api/v1/submissions/${created.id}/review`, { decision: "approve" });
     expect(own.status).toBe(403);
     expect((await fetch(`${BASE_URL}/api/v1/parts/${created.slug}`)).status).toBe(404);
@@ -182,10 +184,7 @@ describe("9 · the smaller defects", () => {
   it("pages GET /api/v1/submissions", async () => {
     const member = await signedIn("member@trainyard.test");
     for (let i = 0; i < 3; i++) {
-      const form = new FormData();
-      form.set("part", JSON.stringify({ kind: "spacer", maker: "Test Bench Works", model: `Page ${Date.now()} ${i}`, front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm: 3 + i }));
-      form.set("specSheet", new Blob([PDF as BlobPart], { type: "application/pdf" }), "s.pdf");
-      expect((await member.request("/api/v1/submissions", { method: "POST", body: form })).status).toBe(201);
+      expect((await member.request("/api/v1/submissions", { method: "POST", body: partForm(`Page ${i}`, 3 + i) })).status).toBe(201);
     }
     const seen: string[] = [];
     let cursor: string | null = null;
@@ -239,10 +238,8 @@ describe("issue 13 · headers on pages, the API and spec sheets", () => {
 
   it("serves a spec sheet with its sniffed type, a download name and nosniff", async () => {
     const member = await signedIn("member@trainyard.test");
-    const form = new FormData();
-    form.set("part", JSON.stringify({ kind: "spacer", maker: "Test Bench Works", model: `Sheet ${Date.now()}`, front: { interface: "M48x0.75", gender: "female" }, rear: { interface: "M48x0.75", gender: "male" }, lengthMm: 6 }));
     // Claimed as HTML; the bytes are a PDF.
-    form.set("specSheet", new Blob([PDF as BlobPart], { type: "text/html" }), "sheet.html");
+    const form = partForm("Sheet", 6, { bytes: PDF, type: "text/html", name: "sheet.html" });
     const created = await (await member.request("/api/v1/submissions", { method: "POST", body: form })).json();
     const sheet = await member.get(`/api/v1/submissions/${created.id}/spec-sheet`);
     expect(sheet.headers.get("content-type")).toBe("application/pdf");
