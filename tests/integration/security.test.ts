@@ -226,8 +226,10 @@ describe("issue 13 · headers on pages, the API and spec sheets", () => {
     expect(html).toContain(`nonce="${nonce}"`);
     expect(res.headers.get("x-content-type-options")).toBe("nosniff");
     expect(res.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
-    // Plain HTTP here: no HSTS (a browser would pin a site that cannot do HTTPS).
+    // Plain HTTP here: no HSTS (a browser would pin a site that cannot do HTTPS), and a
+    // client's own X-Forwarded-Proto does not count (no trusted proxy is configured).
     expect(res.headers.get("strict-transport-security")).toBeNull();
+    expect((await fetch(`${BASE_URL}/plan`, { headers: { "x-forwarded-proto": "https" } })).headers.get("strict-transport-security")).toBeNull();
     // A second view gets a different nonce.
     const again = (await fetch(`${BASE_URL}/plan`)).headers.get("content-security-policy") ?? "";
     expect(/'nonce-([^']+)'/.exec(again)?.[1]).not.toBe(nonce);

@@ -12,7 +12,11 @@ describe("demo builds on restart", () => {
     const db = new pg.Client({ connectionString: process.env.DATABASE_URL });
     await db.connect();
     const count = async () => Number((await db.query("SELECT count(*) FROM builds WHERE title = $1", [TITLE])).rows[0].count);
+    // The test runner seeds the catalog but not the demo builds: seed them here, and remove
+    // afterwards whatever this test added, so the other suites see the database as it was.
+    const before = new Set((await db.query("SELECT id FROM builds")).rows.map((r) => r.id as string));
     try {
+      await seedDemoBuilds(BASE_URL, () => {});
       expect(await count()).toBe(1);
       // 101 newer private builds of the same author push the demo build off the first page.
       await db.query(`
@@ -22,7 +26,7 @@ describe("demo builds on restart", () => {
       await seedDemoBuilds(BASE_URL, () => {});
       expect(await count()).toBe(1);
     } finally {
-      await db.query("DELETE FROM builds WHERE title LIKE 'Bulk copy %'");
+      await db.query("DELETE FROM builds WHERE NOT (id = ANY($1::text[]))", [[...before]]);
       await db.end();
     }
   });
