@@ -25,6 +25,9 @@ if (dev) {
   const upgrade = app.getUpgradeHandler();
   server.on("upgrade", (req, socket, head) => void upgrade(req, socket, head));
 }
+// A taken port must end this process (Next's own handlers would otherwise keep it alive, and
+// the start script would find whatever else answers on that port healthy).
+server.on("error", (err) => { console.error(`Cannot listen on ${hostname}:${port}: ${err.message}`); process.exit(1); });
 server.listen(port, hostname, () => console.log(`▲ Trainyard on http://${hostname}:${port}${dev ? " (development)" : ""}${trusted ? " · trusting forwarded headers from configured proxies" : ""}`));
 const stop = () => server.close(() => process.exit(0));
 process.on("SIGTERM", stop);
