@@ -25,7 +25,7 @@ function pool(): Piscina {
   return globalForPool.trainyardSolvePool;
 }
 
-export async function solveInWorker(request: SolveRequest): Promise<SolveResult> {
+export async function solveInWorker(request: SolveRequest, budgetMs = SOLVE_BUDGET_MS): Promise<SolveResult> {
   const p = pool();
   if (p.queueSize >= MAX_QUEUE) {
     const e = new AppError("unavailable:busy", "The planner is busy with other large requests. Try again in a few seconds.");
@@ -33,10 +33,10 @@ export async function solveInWorker(request: SolveRequest): Promise<SolveResult>
     throw e;
   }
   try {
-    return await p.run(request, { signal: AbortSignal.timeout(SOLVE_BUDGET_MS) }) as SolveResult;
+    return await p.run(request, { signal: AbortSignal.timeout(budgetMs) }) as SolveResult;
   } catch (err) {
     if ((err as Error)?.name === "AbortError" || (err as Error)?.name === "TimeoutError") {
-      throw new AppError("bad_request:too_complex", `This plan needs more than ${SOLVE_BUDGET_MS / 1000} s of work: send fewer parts or a lower maxParts.`);
+      throw new AppError("bad_request:too_complex", `This plan needs more than ${budgetMs / 1000} s of work: send fewer parts or a lower maxParts.`);
     }
     throw err;
   }
