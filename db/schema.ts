@@ -218,3 +218,4 @@ export type MailRow = typeof mailOutbox.$inferSelect;
 
 export * from "./schema-shops";
 export * from "./schema-orders";
+export * from "./schema-security";

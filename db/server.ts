@@ -10,7 +10,7 @@ export type PgServer = { url: (database: string) => string; port: number; stop: 
 
 const isRoot = () => typeof process.getuid === "function" && process.getuid() === 0;
 
-function findBinDir(): string | null {
+export function findBinDir(): string | null {
   const candidates: string[] = [];
   try {
     const out = execFileSync("pg_config", ["--bindir"], { encoding: "utf8", stdio: ["ignore", "pipe", "ignore"] }).trim();
@@ -68,12 +68,19 @@ async function pickPort(preferred: number | undefined): Promise<number> {
   throw new Error("No free port for PostgreSQL between 54329 and 54428: set PGPORT.");
 }
 
-/** `port` undefined: 54329, or the next free one when another cluster already holds it. */
-export async function startPostgres(opts: { root: string; port?: number; log?: (m: string) => void }): Promise<PgServer> {
+/**
+ * `port` undefined: 54329, or the next free one when another cluster already holds it.
+ *
+ * `throwaway` is for the test runner alone: its own cluster (.data/postgres-test) with fsync
+ * and synchronous commit off, for speed, because nothing in it needs to survive a crash. The
+ * cluster `npm start` and `npm run dev` use keeps PostgreSQL's durable defaults: with fsync
+ * off an operating-system crash can corrupt the whole cluster (issue 15).
+ */
+export async function startPostgres(opts: { root: string; port?: number; throwaway?: boolean; log?: (m: string) => void }): Promise<PgServer> {
   const log = opts.log ?? ((m) => console.log(`[postgres] ${m}`));
   const bin = ensureBinaries(log);
   const dataRoot = path.join(opts.root, ".data");
-  const dataDir = path.join(dataRoot, "postgres");
+  const dataDir = path.join(dataRoot, opts.throwaway ? "postgres-test" : "postgres");
   mkdirSync(dataRoot, { recursive: true });
   let uid = 0, gid = 0;
   if (isRoot()) {
@@ -106,16 +113,18 @@ export async function startPostgres(opts: { root: string; port?: number; log?: (
     log(`reusing the running cluster on 127.0.0.1:${port}`);
   } else {
     port = await pickPort(opts.port);
-    const logFile = path.join(dataRoot, "postgres.log");
+    const logFile = path.join(dataRoot, opts.throwaway ? "postgres-test.log" : "postgres.log");
     writeFileSync(logFile, "", { flag: "a" });
     if (isRoot()) chownSync(logFile, uid, gid);
-    const o = `-c listen_addresses=127.0.0.1 -p ${port} -k ${dataDir} -c fsync=off -c synchronous_commit=off -c max_connections=200`;
+    const speed = opts.throwaway ? " -c fsync=off -c synchronous_commit=off -c full_page_writes=off" : "";
+    const o = `-c listen_addresses=127.0.0.1 -p ${port} -k ${dataDir} -c max_connections=200${speed}`;
     const r = runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-l", logFile, "-o", o, "-w", "-t", "60", "start"]);
     if (!r.ok) throw new Error(`PostgreSQL did not start (see ${logFile}):\n${r.out}`);
     started = true;
     log(`listening on 127.0.0.1:${port}`);
   }
   const url = (database: string) => `postgres://postgres@127.0.0.1:${port}/${database}`;
+  if (!started && !opts.throwaway) await warnIfNotDurable(url("postgres"), log);
   return {
     url, port, started,
     stop: () => {
@@ -123,6 +132,21 @@ export async function startPostgres(opts: { root: string; port?: number; log?: (
       runAsOwner(path.join(bin, "pg_ctl"), ["-D", dataDir, "-m", "fast", "-w", "stop"], { quiet: true });
     },
   };
+}
+
+/** A reused cluster may have been started by an older version with fsync off: say so plainly. */
+async function warnIfNotDurable(adminUrl: string, log: (m: string) => void) {
+  const client = new pg.Client({ connectionString: adminUrl });
+  try {
+    await client.connect();
+    const fsync = (await client.query("SHOW fsync")).rows[0].fsync;
+    const commit = (await client.query("SHOW synchronous_commit")).rows[0].synchronous_commit;
+    if (fsync === "off" || commit === "off") {
+      log(`WARNING: this running cluster has fsync=${fsync}, synchronous_commit=${commit}: a crash could lose or corrupt data. Stop it (Ctrl-C every npm start, or pg_ctl -D .data/postgres stop) and start again to get the durable defaults.`);
+    }
+  } catch { /* the caller's own connection reports real problems */ } finally {
+    await client.end().catch(() => {});
+  }
 }
 
 export async function ensureDatabase(adminUrl: string, database: string, opts: { fresh?: boolean } = {}) {

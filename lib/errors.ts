@@ -1,17 +1,19 @@
 // One error type for the whole app; `toErrorResponse` turns it into JSON and hides internals.
 export type ErrorCode =
   | "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "payload_too_large"
-  | "unavailable" | "internal";
+  | "unsupported_media_type" | "too_many_requests" | "unavailable" | "internal";
 
 const STATUS: Record<ErrorCode, number> = {
   bad_request: 400, unauthorized: 401, forbidden: 403, not_found: 404, conflict: 409,
-  payload_too_large: 413, unavailable: 503, internal: 500,
+  payload_too_large: 413, unsupported_media_type: 415, too_many_requests: 429, unavailable: 503, internal: 500,
 };
 
 export class AppError extends Error {
   readonly code: string;
   readonly status: number;
   readonly fields?: Record<string, string[]>;
+  /** Extra response headers (Retry-After on a 429). */
+  headers?: Record<string, string>;
 
   /** `code` is "kind" or "kind:subject", e.g. "not_found:build", "forbidden:shop". */
   constructor(code: `${ErrorCode}` | `${ErrorCode}:${string}`, message: string, fields?: Record<string, string[]>) {
@@ -58,7 +60,8 @@ export function errorBody(err: unknown): { status: number; body: ErrorBody } {
 
 export function toErrorResponse(err: unknown): Response {
   const { status, body } = errorBody(err);
-  return Response.json(body, { status, headers: status === 503 ? { "retry-after": "5" } : undefined });
+  const headers = err instanceof AppError && err.headers ? err.headers : status === 503 ? { "retry-after": "5" } : undefined;
+  return Response.json(body, { status, headers });
 }
 
 type Issue = { path: readonly PropertyKey[]; message: string; code?: string; errors?: readonly (readonly Issue[])[] };

@@ -59,11 +59,23 @@ export async function seedDemoBuilds(baseUrl: string, log: (m: string) => void =
     }
     return sessions.get(email)!;
   };
+  // Every page of the author's builds, not just the first: a busy author has more than 100.
+  const titlesOf = async (author: Session) => {
+    const titles = new Set<string>();
+    let cursor: string | null = null;
+    do {
+      const res = await author.send(`/api/v1/builds?mine=1&limit=100${cursor ? `&cursor=${cursor}` : ""}`, "GET");
+      if (!res.ok) throw new Error(`listing builds failed: ${res.status}`);
+      const page = await res.json() as { items: { title: string }[]; nextCursor: string | null };
+      for (const b of page.items) titles.add(b.title);
+      cursor = page.nextCursor;
+    } while (cursor);
+    return titles;
+  };
   let added = 0;
   for (const plan of PLANS) {
     const author = await as(plan.author);
-    const mine = await (await author.send(`/api/v1/builds?mine=1&limit=100`, "GET")).json() as { items: { title: string }[] };
-    if (mine.items.some((b) => b.title === plan.title)) continue;
+    if ((await titlesOf(author)).has(plan.title)) continue;
     // Like a careful person: of the ranked answers, take the first with the fewest warnings.
     const solved = await (await author.send("/api/v1/solve", "POST", requestFor(plan.demo))).json() as { solutions?: { warnings: unknown[] }[] };
     const warningsOf = (solved.solutions ?? []).map((c) => c.warnings.length);

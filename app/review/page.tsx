@@ -15,7 +15,7 @@ export default async function ReviewPage() {
   const user = await getSessionUser();
   if (!user) redirect("/sign-in?next=/review");
   if (!allowed(user, { part: "review" })) return <p className="text-muted">Only moderators review submissions.</p>;
-  const pending = await listPendingSubmissions();
+  const { items: pending } = await listPendingSubmissions({ limit: 100 });
   return (
     <div className="max-w-5xl">
       <PageTitle title="Review queue" lead="Compare each submitted part with its spec sheet. Approved parts join the catalog and the planner at once.">

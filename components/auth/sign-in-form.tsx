@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { authClient } from "@/lib/auth/client";
+import { safeNextPath } from "@/lib/auth/safe-next";
 import { signInSchema, type SignInInput } from "@/lib/validation/auth";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
@@ -21,7 +22,7 @@ export function SignInForm({ next }: { next?: string }) {
       else setMessage({ tone: "bad", text: error.status === 401 ? "That e-mail and password do not match an account." : error.message ?? "Sign-in failed." });
       return;
     }
-    router.push(next && next.startsWith("/") ? next : "/plan");
+    router.push(safeNextPath(next));
     router.refresh();
   }
 

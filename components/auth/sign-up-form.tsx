@@ -26,7 +26,7 @@ export function SignUpForm({ outbox }: { outbox: boolean }) {
     return (
       <FormMessage tone="ok">
         We sent a confirmation link to <strong>{sentTo}</strong>. Open it to finish creating your account.
-        {outbox ? <> On this machine mail is kept in the <a className="underline" href="/dev/outbox">local outbox</a>.</> : null}
+        {outbox ? <> On this machine mail is kept in the <a className="underline" href="/dev/outbox">local outbox</a>, which the site&apos;s admin can read.</> : null}
       </FormMessage>
     );
   }

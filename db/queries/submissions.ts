@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, ilike, ne } from "drizzle-orm";
+import { and, asc, count, desc, eq, gt, gte, ilike, lt, ne, or } from "drizzle-orm";
 import { db } from "@/db/client";
 import { parts, user } from "@/db/schema";
 import { bumpCatalogVersion } from "./parts";
@@ -31,13 +31,45 @@ export async function createSubmission({ input, userId, specSheet }: {
   return row;
 }
 
-export async function listPendingSubmissions() {
-  return db.select({ part: parts, submitter: { name: user.name, email: user.email } }).from(parts)
-    .leftJoin(user, eq(user.id, parts.submittedBy)).where(eq(parts.status, "pending")).orderBy(asc(parts.createdAt));
+type Page = { limit: number; cursor?: string };
+
+// Keyset paging on (created_at, id): the cursor is the last row's pair, base64url-encoded.
+function decodeCursor(cursor: string | undefined): { at: Date; id: string } | null {
+  if (!cursor) return null;
+  const [at, id] = Buffer.from(cursor, "base64url").toString("utf8").split("|");
+  if (!id || Number.isNaN(Date.parse(at)) || id.includes("\u0000")) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+  return { at: new Date(at), id };
+}
+const encodeCursor = (row: { createdAt: Date; id: string }) => Buffer.from(`${row.createdAt.toISOString()}|${row.id}`).toString("base64url");
+
+function pageOf<T>(rows: T[], limit: number, key: (r: T) => { createdAt: Date; id: string }) {
+  const items = rows.slice(0, limit);
+  return { items, nextCursor: rows.length > limit ? encodeCursor(key(items[items.length - 1])) : null };
 }
 
-export async function listSubmissionsBy({ userId }: { userId: string }) {
-  return db.select().from(parts).where(eq(parts.submittedBy, userId)).orderBy(desc(parts.createdAt)).limit(100);
+/** The moderators' queue, oldest first. */
+export async function listPendingSubmissions({ limit, cursor }: Page = { limit: 100 }) {
+  const after = decodeCursor(cursor);
+  const rows = await db.select({ part: parts, submitter: { name: user.name, email: user.email } }).from(parts)
+    .leftJoin(user, eq(user.id, parts.submittedBy))
+    .where(and(eq(parts.status, "pending"), after ? or(gt(parts.createdAt, after.at), and(eq(parts.createdAt, after.at), gt(parts.id, after.id))) : undefined))
+    .orderBy(asc(parts.createdAt), asc(parts.id)).limit(limit + 1);
+  return pageOf(rows, limit, (r) => r.part);
+}
+
+/** A member's own submissions, newest first. */
+export async function listSubmissionsBy({ userId, limit, cursor }: { userId: string } & Page) {
+  const before = decodeCursor(cursor);
+  const rows = await db.select().from(parts)
+    .where(and(eq(parts.submittedBy, userId), before ? or(lt(parts.createdAt, before.at), and(eq(parts.createdAt, before.at), lt(parts.id, before.id))) : undefined))
+    .orderBy(desc(parts.createdAt), desc(parts.id)).limit(limit + 1);
+  return pageOf(rows, limit, (r) => r);
+}
+
+/** How many parts a member submitted since `since` (the upload quota). */
+export async function countSubmissionsSince({ userId, since }: { userId: string; since: Date }): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(parts).where(and(eq(parts.submittedBy, userId), gte(parts.createdAt, since)));
+  return row?.n ?? 0;
 }
 
 export async function getSubmissionOrThrow({ id }: { id: string }) {

@@ -5,18 +5,16 @@ import { nextCookies } from "better-auth/next-js";
 import { admin, organization } from "better-auth/plugins";
 import { getDb } from "@/db/client";
 import * as schema from "@/db/schema";
+import { configuredSiteUrl, trustedOrigins } from "@/lib/http/origin";
 import { linkMail, sendMail } from "@/lib/mail";
 import { shopAc, shopRoles, siteAc, siteRoles } from "./roles";
-
-const port = process.env.PORT ?? "3000";
-const baseURL = process.env.BETTER_AUTH_URL ?? `http://127.0.0.1:${port}`;
 
 function createAuth() {
   return betterAuth({
     appName: "Trainyard",
-    baseURL,
+    baseURL: configuredSiteUrl(),
     secret: process.env.BETTER_AUTH_SECRET,
-    trustedOrigins: [...new Set([baseURL, `http://127.0.0.1:${port}`, `http://localhost:${port}`])],
+    trustedOrigins: trustedOrigins(),
     database: drizzleAdapter(getDb(), { provider: "pg", schema }),
     emailAndPassword: {
       enabled: true,
@@ -41,9 +39,10 @@ function createAuth() {
         });
       },
     },
-    // On unless switched off (the test runner does, to sign in many times a minute).
+    // On unless switched off (the test runner does, to sign in many times a minute). Counted
+    // in PostgreSQL (db/schema-security.ts) so that every app instance shares one window.
     rateLimit: {
-      enabled: process.env.TRAINYARD_RATE_LIMIT !== "0", window: 60, max: 100,
+      enabled: process.env.TRAINYARD_RATE_LIMIT !== "0", window: 60, max: 100, storage: "database",
       // Enough for a household or a club behind one address, few enough to slow guessing.
       customRules: {
         "/sign-in/email": { window: 60, max: 30 },
@@ -51,7 +50,12 @@ function createAuth() {
         "/request-password-reset": { window: 60, max: 10 },
       },
     },
-    advanced: { database: { generateId: () => crypto.randomUUID() } },
+    advanced: {
+      database: { generateId: () => crypto.randomUUID() },
+      // The front server (lib/dev/serve.ts) replaces X-Forwarded-For with the real client
+      // address, so this header can no longer be made up by the client to dodge the limits.
+      ipAddress: { ipAddressHeaders: ["x-forwarded-for"] },
+    },
     plugins: [
       admin({ ac: siteAc, roles: siteRoles, defaultRole: "member", adminRoles: ["admin"] }),
       organization({ ac: shopAc, roles: shopRoles, creatorRole: "owner", allowUserToCreateOrganization: true }),

@@ -2,7 +2,9 @@ import "server-only";
 import { headers } from "next/headers";
 import type { z } from "zod";
 import { AppError, fieldErrorsOf, toErrorResponse } from "@/lib/errors";
-import { findNul, NUL_MESSAGE } from "@/lib/validation/nul";
+import { readJsonBody, refuseNul } from "@/lib/http/body";
+import { assertTrustedOrigin } from "@/lib/http/origin";
+import { consumeLimit, type LimitName } from "@/lib/http/rate-limit";
 import { getAuth } from "./index";
 import { can, roleOf, type SitePermission, type SiteRole } from "./roles";
 
@@ -31,24 +33,30 @@ export function requireUser(user: SessionUser | null, permission?: SitePermissio
 type RouteContext<P> = { params: Promise<P> };
 type Handler<P, U> = (request: Request, ctx: { user: U; params: P }) => Promise<Response> | Response;
 
+const WRITE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
+
 /**
- * The one wrapper for route handlers: resolves the session, checks the role, awaits params,
- * and turns any thrown error into the JSON error shape. Ownership is checked by the handler
- * (through getXOrThrow query helpers), never assumed from the URL.
+ * The one wrapper for route handlers: refuses writes from foreign origins (403), resolves the
+ * session, checks the role, counts the request against its rate limit (`limit`, or "write" for
+ * any write), awaits params, and turns any thrown error into the JSON error shape. Ownership
+ * is checked by the handler (through getXOrThrow query helpers), never assumed from the URL.
  */
 export function withSession<P = Record<string, string>>(
-  handler: Handler<P, SessionUser>, opts?: { permission?: SitePermission },
+  handler: Handler<P, SessionUser>, opts?: { permission?: SitePermission; limit?: LimitName; anonymous?: false },
 ): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
 export function withSession<P = Record<string, string>>(
-  handler: Handler<P, SessionUser | null>, opts: { anonymous: true },
+  handler: Handler<P, SessionUser | null>, opts: { anonymous: true; limit?: LimitName },
 ): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
 export function withSession<P>(
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- narrowed by the overloads above
-  handler: Handler<P, any>, opts: { permission?: SitePermission; anonymous?: boolean } = {},
+  handler: Handler<P, any>, opts: { permission?: SitePermission; anonymous?: boolean; limit?: LimitName } = {},
 ) {
   return async (request: Request, ctx: RouteContext<P>) => {
     try {
+      assertTrustedOrigin(request);
       const user = await getSessionUser(request.headers);
+      const limit = opts.limit ?? (WRITE_METHODS.has(request.method.toUpperCase()) ? "write" : null);
+      if (limit) await consumeLimit(request, limit, user?.id ?? null);
       if (!opts.anonymous) requireUser(user, opts.permission);
       const params = (await ctx?.params) ?? ({} as P);
       return await handler(request, { user, params });
@@ -58,29 +66,10 @@ export function withSession<P>(
   };
 }
 
-/** Read a JSON body: 413 past `maxBytes`, 400 when it is not JSON. */
-export async function readJsonBody(request: Request, maxBytes = 8_000_000): Promise<unknown> {
-  const tooLarge = () => new AppError("payload_too_large", `The request is larger than ${Math.round(maxBytes / 1e6)} MB.`);
-  if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
-  const text = await request.text();
-  if (text.length > maxBytes) throw tooLarge();
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    throw new AppError("bad_request:json", "The request body is not valid JSON.");
-  }
-  refuseNul(value);
-  return value;
-}
+export { readJsonBody };
 
-function refuseNul(raw: unknown) {
-  const at = findNul(raw);
-  if (at) throw new AppError("bad_request:validation", "Some fields need attention.", { [at]: [NUL_MESSAGE] });
-}
-
-/** Parse a JSON body with a zod schema; 400 with field errors when it does not fit. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 8_000_000): Promise<z.output<S>> {
+/** Parse a JSON body with a zod schema: 415 unless JSON, 413 past `maxBytes`, 400 with field errors when it does not fit. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 1_000_000): Promise<z.output<S>> {
   return parseWith(schema, await readJsonBody(request, maxBytes));
 }
 

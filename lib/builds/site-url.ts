@@ -1,12 +1,18 @@
 // Absolute addresses for links that leave the site (share snippets, og:image, API `url`).
 
-/** The origin the visitor used (Host header), else BETTER_AUTH_URL. */
+import { configuredSiteUrl, trustedOrigins } from "@/lib/http/origin";
+
+/**
+ * The configured site URL (BETTER_AUTH_URL). A request's Host decides only between the
+ * trusted spellings of this same site (127.0.0.1 or localhost); X-Forwarded-Host and any
+ * other host never decide a link that leaves the site (issue 16).
+ */
 export function siteOrigin(h: Headers | null): string {
-  const configured = process.env.BETTER_AUTH_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`;
-  const host = h?.get("x-forwarded-host") ?? h?.get("host");
-  if (!host || !/^[A-Za-z0-9.-]+(:\d{1,5})?$|^\[[0-9a-fA-F:]+\](:\d{1,5})?$/.test(host)) return configured.replace(/\/$/, "");
-  const proto = h?.get("x-forwarded-proto")?.split(",")[0]?.trim() || new URL(configured).protocol.replace(":", "");
-  return `${proto === "https" ? "https" : "http"}://${host}`;
+  const configured = configuredSiteUrl();
+  const host = h?.get("host");
+  if (!host) return configured;
+  const asked = `${new URL(configured).protocol}//${host}`;
+  return trustedOrigins().includes(asked) ? asked : configured;
 }
 
 export const buildPath = (slug: string) => `/b/${slug}`;

@@ -17,6 +17,7 @@ function newestMtime(p: string): number {
 export function buildIsStale(root: string): boolean {
   const buildId = path.join(root, process.env.NEXT_DIST_DIR ?? ".next", "BUILD_ID");
   if (!existsSync(buildId)) return true;
+  if (!existsSync(path.join(path.dirname(buildId), "solve-worker.mjs"))) return true;
   const built = statSync(buildId).mtimeMs;
   return SOURCES.some((s) => newestMtime(path.join(root, s)) > built);
 }
@@ -26,10 +27,18 @@ const nextBin = (root: string) => path.join(root, "node_modules", "next", "dist"
 export function buildApp(root: string, env: NodeJS.ProcessEnv) {
   const r = spawnSync(process.execPath, [nextBin(root), "build"], { cwd: root, stdio: "inherit", env: { ...env, NEXT_TELEMETRY_DISABLED: "1" } });
   if (r.status !== 0) throw new Error("next build failed");
+  buildWorker(root, env);
 }
 
+/** The solve worker (lib/solve-pool) is bundled beside the build; `npm run dev` needs it too. */
+export function buildWorker(root: string, env: NodeJS.ProcessEnv) {
+  const r = spawnSync(process.execPath, ["--import", "tsx", path.join(root, "lib", "solve-pool", "build.ts")], { cwd: root, stdio: "inherit", env });
+  if (r.status !== 0) throw new Error("bundling the solve worker failed");
+}
+
+/** Serves through lib/dev/serve.ts (Next.js behind a server that sets the real client address). */
 export function serveApp(root: string, opts: { port: number; dev: boolean; env: NodeJS.ProcessEnv; quiet?: boolean }): ChildProcess {
-  const args = [nextBin(root), opts.dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(opts.port)];
+  const args = ["--import", "tsx", path.join(root, "lib", "dev", "serve.ts"), ...(opts.dev ? ["--dev"] : []), "-H", "127.0.0.1", "-p", String(opts.port)];
   return spawn(process.execPath, args, {
     cwd: root, stdio: opts.quiet ? ["ignore", "pipe", "pipe"] : "inherit",
     env: { ...opts.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: opts.dev ? "development" : "production" },

@@ -35,6 +35,8 @@ export type Services = { env: Record<string, string>; databaseUrl: string; stop:
 
 export async function startServices(opts: {
   root: string; appPort: number; database: string; fresh?: boolean; secret?: string; log?: (m: string) => void;
+  /** The test runner's own fast, non-durable cluster (see startPostgres). */
+  throwawayDatabase?: boolean;
 }): Promise<Services> {
   const log = opts.log ?? console.log;
   const stops: (() => Promise<void> | void)[] = [];
@@ -42,8 +44,8 @@ export async function startServices(opts: {
   let databaseUrl = process.env.DATABASE_URL ?? "";
   try {
     if (!databaseUrl) {
-      const pgPort = process.env.PGPORT ? Number(process.env.PGPORT) : undefined;
-      const server = await startPostgres({ root: opts.root, port: pgPort, log: (m) => log(`[postgres] ${m}`) });
+      const pgPort = opts.throwawayDatabase ? await freePort() : process.env.PGPORT ? Number(process.env.PGPORT) : undefined;
+      const server = await startPostgres({ root: opts.root, port: pgPort, throwaway: opts.throwawayDatabase, log: (m) => log(`[postgres] ${m}`) });
       stops.push(server.stop);
       await ensureDatabase(server.url("postgres"), opts.database, { fresh: opts.fresh });
       databaseUrl = server.url(opts.database);

@@ -4,7 +4,7 @@ import { fileURLToPath } from "node:url";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "@/seed/accounts";
 import { seedDemoBuilds } from "@/seed/demo-builds";
 import { seedDemo } from "@/seed/index";
-import { buildApp, buildIsStale, serveApp, waitForHealth } from "./next-process";
+import { buildApp, buildIsStale, buildWorker, serveApp, waitForHealth } from "./next-process";
 import { startServices } from "./services";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "..");
@@ -31,6 +31,7 @@ try {
     console.log("[next] building the app (first start or sources changed)…");
     buildApp(root, env);
   }
+  if (dev) buildWorker(root, env);
   child = serveApp(root, { port, dev, env });
   child.on("exit", (code) => void shutdown(code ?? 0));
   await waitForHealth(`http://127.0.0.1:${port}`, dev ? 300_000 : 120_000);

@@ -47,11 +47,13 @@ if (!process.env.TRAINYARD_UNIT_ONLY) {
   const haveChromium = ensureChromium();
   const appPort = await freePort();
   const database = `trainyard_test_${process.pid}`;
-  const services = await startServices({ root, appPort, database, fresh: true, secret: crypto.randomUUID() + crypto.randomUUID() });
+  const services = await startServices({ root, appPort, database, fresh: true, throwawayDatabase: true, secret: crypto.randomUUID() + crypto.randomUUID() });
   let app: ReturnType<typeof serveApp> | undefined;
   try {
     await seedDemo(services.databaseUrl);
-    const env = { ...process.env, ...services.env, TRAINYARD_RATE_LIMIT: "0" };
+    // Limits off for the general suite (tests/integration/limits.test.ts starts its own
+    // instances with them on); a large upload quota so that no suite trips over it.
+    const env = { ...process.env, ...services.env, TRAINYARD_RATE_LIMIT: "0", TRAINYARD_UPLOADS_PER_DAY: "100000", TRAINYARD_TEST_RUNNER: "1" };
     if (!process.env.TRAINYARD_SKIP_BUILD) buildApp(root, env);
     app = serveApp(root, { port: appPort, dev: false, env, quiet: true });
     let appLog = "";

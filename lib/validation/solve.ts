@@ -4,12 +4,16 @@
 import { z } from "zod";
 import { fieldErrorsOf } from "@/lib/errors";
 
+// Sized to what a real plan needs (a shop's whole adapter range is a few hundred parts; a
+// train rarely has more than ten pieces; the planner asks for 8 answers), so that one
+// request's work stays small. The body cap is what 2,000 described parts take as JSON.
 export const LIMITS = {
-  parts: 20_000,
+  parts: 2_000,
   stations: 8,
   filters: 8,
-  maxParts: 16,
-  maxSolutions: 50,
+  maxParts: 12,
+  maxSolutions: 20,
+  requestBytes: 1_000_000,
   interfaceChars: 40,
   idChars: 200,
   nameChars: 200,

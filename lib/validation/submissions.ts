@@ -23,3 +23,11 @@ export const partPatchSchema = z.object({
   specs: partSpecsSchema.partial().optional(),
 }).strict().refine((v) => Object.keys(v).length > 0, { message: "Send at least one field to change" });
 export type PartPatch = z.infer<typeof partPatchSchema>;
+
+/** GET /api/v1/submissions?limit=&cursor= — one page of the queue (or of your own submissions). */
+export const listSubmissionsQuerySchema = z.object({
+  limit: z.coerce.number({ message: "A whole number from 1 to 100" }).int("A whole number from 1 to 100")
+    .min(1, "A whole number from 1 to 100").max(100, "A whole number from 1 to 100").default(50),
+  cursor: z.string().max(300).regex(/^[A-Za-z0-9_-]*$/, "Not a cursor from this API").optional(),
+});
+export type ListSubmissionsQuery = z.infer<typeof listSubmissionsQuerySchema>;

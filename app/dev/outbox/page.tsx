@@ -3,7 +3,8 @@ import { listPendingMail } from "@/db/queries/jobs";
 import { listOutboxMessages } from "@/db/queries/outbox";
 import { PendingMailList } from "@/components/outbox/pending-mail";
 import { PageTitle } from "@/components/ui/card";
-import { isMailFake } from "@/lib/mail";
+import { getSessionUser } from "@/lib/auth/session";
+import { mayReadOutbox } from "@/lib/dev/outbox-access";
 
 export const metadata = { title: "Local outbox" };
 export const dynamic = "force-dynamic";
@@ -14,7 +15,7 @@ function linkify(text: string) {
 }
 
 export default async function OutboxPage() {
-  if (!isMailFake()) notFound();
+  if (!mayReadOutbox(await getSessionUser())) notFound();
   const [messages, pending] = await Promise.all([listOutboxMessages({ limit: 100 }), listPendingMail()]);
   return (
     <div className="max-w-4xl">

@@ -2,6 +2,7 @@
 import { getSubmissionOrThrow, reviewSubmission } from "@/db/queries/submissions";
 import { parseJsonBody, withSession } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
+import { AppError } from "@/lib/errors";
 import { sendMail } from "@/lib/mail";
 import { reviewDecisionSchema } from "@/lib/validation/submissions";
 
@@ -9,6 +10,10 @@ export const dynamic = "force-dynamic";
 
 export const POST = withSession<{ id: string }>(async (request, { user, params }) => {
   const { decision, reason } = await parseJsonBody(request, reviewDecisionSchema);
+  // Four eyes: a moderator's own part is checked by someone else.
+  if ((await getSubmissionOrThrow({ id: params.id })).part.submittedBy === user.id) {
+    throw new AppError("forbidden:own_submission", "Another moderator must review a part you submitted yourself.");
+  }
   const updated = await reviewSubmission({ id: params.id, reviewerId: user.id, decision, reason });
   const { submitterEmail } = await getSubmissionOrThrow({ id: params.id });
   if (submitterEmail) {
