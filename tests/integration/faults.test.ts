@@ -55,13 +55,15 @@ async function killApp(signal: NodeJS.Signals) {
   await exited;
 }
 
-async function signIn() {
+async function signIn(email = "member@trainyard.test"): Promise<string> {
   const res = await fetch(`${base}/api/auth/sign-in/email`, {
     method: "POST", headers: { "content-type": "application/json", origin: base },
-    body: JSON.stringify({ email: "member@trainyard.test", password: process.env.DEMO_PASSWORD ?? "trainyard-demo" }),
+    body: JSON.stringify({ email, password: process.env.DEMO_PASSWORD ?? "trainyard-demo" }),
   });
   expect(res.status).toBe(200);
-  cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const got = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  if (email === "member@trainyard.test") cookie = got;
+  return got;
 }
 
 type Outcome = { title: string; status: number; slug?: string; code?: string; ms: number; failed?: string };
@@ -225,7 +227,8 @@ describe("durable side effects", () => {
       method: "POST", headers: { "content-type": "application/json", origin: base }, body: JSON.stringify({ email, redirectTo: "/reset-password" }),
     });
     expect(res.status).toBe(200);
-    const outbox = async () => (await (await fetch(`${base}/api/dev/outbox?to=moderator`)).json()) as { messages: { subject: string }[]; pending: { subject: string; state: string; retryCount: number }[] };
+    const adminCookie = await signIn("admin@trainyard.test"); // only an admin may read the outbox
+    const outbox = async () => (await (await fetch(`${base}/api/dev/outbox?to=moderator`, { headers: { cookie: adminCookie } })).json()) as { messages: { subject: string }[]; pending: { subject: string; state: string; retryCount: number }[] };
     // The worker tries, fails (nothing listens), and keeps the job for a retry.
     await until("a failed delivery attempt", async () => (await outbox()).pending.some((p) => p.retryCount > 0), 20_000);
     expect((await outbox()).messages.some((m) => /reset/i.test(m.subject))).toBe(false);

@@ -235,8 +235,8 @@ export const MATRIX: Row[] = [
   }),
   // ── admin and the dev outbox ───────────────────────────────────────────────────────────────
   row("GET", "/api/v1/admin/users", () => "/api/v1/admin/users", { _: 403, anon: 401, banned: 401, admin: 200 }),
-  // Today's behaviour; issue 16 item 1 (sec) restricts it to admins: change this one line at merge.
-  row("GET", "/api/dev/outbox", () => "/api/dev/outbox", ANYONE),
+  // The outbox holds reset links: only an admin sees it; for everyone else it does not exist.
+  row("GET", "/api/dev/outbox", () => "/api/dev/outbox", { _: 404, admin: 200 }),
   // ── unknown API addresses: a JSON 404 for everyone ───────────────────────────────────────────
   ...(["GET", "POST", "PUT", "PATCH", "DELETE"] as const).map((m) => row(m, "/api/[...path]", () => "/api/v1/no-such-route", { _: 404 })),
   // ── pages that show private data ───────────────────────────────────────────────────────────
@@ -261,7 +261,7 @@ export const MATRIX: Row[] = [
   }),
   row("PAGE", "/b/[slug]", (f) => `/b/${f.hiddenSlug}`, { _: 404, member: 200, moderator: 200, admin: 200 }, { label: "hidden build" }),
   row("PAGE", "/b/[slug]/opengraph-image", (f) => `/b/${f.privateSlug}/opengraph-image`, { _: 404 }, { label: "private build: no preview for anyone" }),
-  row("PAGE", "/dev/outbox", () => "/dev/outbox", ANYONE, { label: "today's behaviour; sec restricts it (issue 16.1)" }),
+  row("PAGE", "/dev/outbox", () => "/dev/outbox", { _: 404, admin: 200 }),
 ];
 
 /** Pages that show nothing private (the walk requires every page to be here or in MATRIX). */
