@@ -106,7 +106,7 @@ export default async function BuildPage({ params }: Props) {
 
       <section aria-labelledby="train-heading" className="rounded-lg border border-line bg-surface p-4">
         <h2 id="train-heading" className="sr-only">The train</h2>
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Train drawing, scrolls sideways">
           <TrainFigure train={buildTrainOf(result, chain)} chain={chain} targetMm={result.targetMm} toleranceMm={result.toleranceMm} filterShiftMm={result.filterShiftMm} />
         </div>
         <p className="mt-2 text-xs text-muted"><span className="sm:hidden">Drag sideways to follow the train to the sensor. </span>Sky on the left, sensor on the right. Behind the optics every box is drawn to scale; joint labels give the thread or barrel and which side is male (♂) or female (♀).</p>
