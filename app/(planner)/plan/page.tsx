@@ -1,7 +1,9 @@
+import { HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { PageTitle } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { parsePlanParams, planStateToParams } from "@/lib/planner/url-state";
+import { firstAnswer } from "./first-answer";
 import { PlanWorkbench } from "./plan-workbench";
 
 export const dynamic = "force-dynamic";
@@ -21,12 +23,15 @@ function toSearchParams(search: Search): URLSearchParams {
 export default async function PlanPage({ searchParams }: { searchParams: Promise<Search> }) {
   const initial = parsePlanParams(toSearchParams(await searchParams));
   const user = await getSessionUser().catch(() => null);
+  const answer = await firstAnswer({ state: initial, viewer: user });
   return (
     <>
       <PageTitle title="Planner"
         lead="Choose the optics, the devices and the camera. Trainyard mates every joint and lands the sensor at the back focus — the link in your address bar reproduces this plan." />
       {/* Keyed by the plan, so following a link to another plan starts from that link. */}
-      <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
+      <HydrationBoundary state={answer ?? undefined}>
+        <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
+      </HydrationBoundary>
     </>
   );
 }
