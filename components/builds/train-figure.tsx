@@ -1,6 +1,6 @@
 // The saved train, drawn on the server: sky left, sensor right, boxes to scale behind the
 // optics, each joint labelled with its interface code, and the back-focus ruler underneath.
-import { getInterface, interfaceHue } from "@/lib/interfaces";
+import { getInterface, interfaceHue, interfaceLabel } from "@/lib/interfaces";
 import { genderSign, landsInside, signedMm, type BuildTrain, type TrainItem } from "@/lib/builds/train";
 import type { Chain } from "@/lib/solver/types";
 
@@ -71,7 +71,7 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
 
   const joints = rows(train.joints.map((j, i) => {
     const spec = getInterface(j.code);
-    const label = `${spec?.kind === "thread" ? j.code : spec?.name ?? j.code} · ${genderSign(j.skyGender)}→${genderSign(j.sensorGender)}`;
+    const label = `${interfaceLabel(j.code)} · ${genderSign(j.skyGender)}→${genderSign(j.sensorGender)}`;
     return { ...j, label, cx: placed[i + 1].x, width: textWidth(label, 11, true) };
   }));
   const names = rows(placed.map((p) => {

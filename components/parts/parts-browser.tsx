@@ -9,7 +9,7 @@ import { useEffect, useMemo, useState } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
 import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
-import { INTERFACES } from "@/lib/interfaces";
+import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { PART_KINDS } from "@/lib/validation/parts";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "./interface-chip";
@@ -82,7 +82,7 @@ export function PartsBrowser() {
         <label className="block"><span className="sr-only">Interface</span>
           <select className={inputClass} value={iface} onChange={(e) => setParam("interface", e.target.value)}>
             <option value="">Any interface</option>
-            {INTERFACES.map((i) => <option key={i.code} value={i.code}>{i.kind === "thread" ? i.code : i.name}</option>)}
+            {INTERFACES.map((i) => <option key={i.code} value={i.code}>{interfaceLabel(i.code)}</option>)}
           </select>
         </label>
       </div>

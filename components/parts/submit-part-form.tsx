@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import { KIND_LABELS } from "@/lib/format";
-import { INTERFACES } from "@/lib/interfaces";
+import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { FILTER_SIZES, OPTICS_ROLES, PART_KINDS, partFormSchema, type PartInput } from "@/lib/validation/parts";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
@@ -57,7 +57,7 @@ export function SubmitPartForm() {
       <div className="grid grid-cols-[1fr_auto] gap-2">
         <select aria-label={`${label} interface`} className={inputClass} {...register(`${side}.interface` as const)}>
           <option value="">No face here</option>
-          {INTERFACES.map((i) => <option key={i.code} value={i.code}>{i.kind === "thread" ? i.code : i.name}</option>)}
+          {INTERFACES.map((i) => <option key={i.code} value={i.code}>{interfaceLabel(i.code)}</option>)}
         </select>
         <select aria-label={`${label} gender`} className={inputClass} {...register(`${side}.gender` as const)}>
           <option value="male">male</option><option value="female">female</option>

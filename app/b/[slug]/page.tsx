@@ -64,7 +64,7 @@ export default async function BuildPage({ params }: Props) {
   const chain = chosenChain(result, build.solutionIndex);
   if (!chain) notFound();
   const origin = siteOrigin(await headers());
-  const snippet = { title: build.title, url: buildUrl(origin, build.slug), imageUrl: buildImageUrl(origin, build.slug) };
+  const snippet = { title: build.title, url: buildUrl(origin, build.slug), imageUrl: buildImageUrl(origin, build.slug), endorsed: !!build.endorsedAt };
   const lines = shoppingList(result, chain);
 
   return (
@@ -140,7 +140,8 @@ export default async function BuildPage({ params }: Props) {
         <aside className="space-y-6">
           <section aria-labelledby="share-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
             <h2 id="share-heading" className="font-semibold text-ink">Share</h2>
-            <SharePanel url={snippet.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={hasPublicPreview(build)} />
+            <SharePanel url={snippet.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={hasPublicPreview(build)}
+              noPreviewReason={build.hiddenAt ? "hidden" : "private"} />
           </section>
           {owner ? (
             <section aria-labelledby="owner-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
