@@ -121,7 +121,8 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
         value={text}
         onChange={(e) => { setText(e.target.value); setOpen(true); setActive(-1); }}
         onClick={() => setOpen(true)}
-        onBlur={() => setTimeout(() => setOpen(false), 120)}
+        // Close after a click on an option has landed, unless the focus came back meanwhile.
+        onBlur={() => setTimeout(() => { if (document.activeElement !== inputRef.current) setOpen(false); }, 120)}
         onKeyDown={onKeyDown}
       />
       {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}

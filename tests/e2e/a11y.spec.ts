@@ -5,16 +5,15 @@ import type { Browser, BrowserContext } from "playwright-core";
 import { DEMO_CASES } from "@/seed/catalog";
 import { seriousViolations, setTheme, type Theme } from "../support/axe";
 import { launch, signInThroughForm } from "../support/browser";
-import { BASE_URL } from "../support/http";
+import { saveBuild } from "../integration/builds-support";
+import { BASE_URL, Client } from "../support/http";
 
 const f = DEMO_CASES.flagship;
 const FLAGSHIP = `/plan?optics=${f.telescope}&corrector=${f.optics}&camera=${f.camera}&stations=${f.stations.join(",")}&filter=${f.filterThicknessMm}&n=1.5168`;
 
-async function firstBuildSlug(): Promise<string> {
-  const res = await fetch(`${BASE_URL}/api/v1/builds`);
-  const body = (await res.json()) as { items: { slug: string }[] };
-  if (!body.items.length) throw new Error("The demo seed saved no public build");
-  return body.items[0].slug;
+/** A public build to scan (the test database has no demo builds: save one). */
+async function publicBuildSlug(): Promise<string> {
+  return saveBuild(await new Client().signIn("member@trainyard.test"), "public");
 }
 
 const ANONYMOUS = ["/", "/plan", FLAGSHIP, "/parts", `/parts/${f.camera}`, "/builds", "/sign-in", "/sign-up", "/forgot-password", "/no-such-page"];
@@ -31,7 +30,7 @@ async function settle(page: import("playwright-core").Page, path: string) {
 describe.each<Theme>(["day", "night"])("axe-core in %s mode", (theme) => {
   let browser: Browser;
   let build = "";
-  beforeAll(async () => { browser = await launch(); build = await firstBuildSlug(); });
+  beforeAll(async () => { browser = await launch(); build = await publicBuildSlug(); });
   afterAll(async () => { await browser?.close(); });
 
   async function scan(context: BrowserContext, paths: string[]) {

@@ -29,6 +29,8 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
       <PageTitle title="Planner"
         lead="Choose the optics, the devices and the camera. Trainyard mates every joint and lands the sensor at the back focus — the link in your address bar reproduces this plan." />
       {/* Keyed by the plan, so following a link to another plan starts from that link. */}
+      {/* The left column's stops are h3s: this keeps the outline h1 → h2 → h3. */}
+      <h2 className="sr-only">Your train and its answer</h2>
       <HydrationBoundary state={answer ?? undefined}>
         <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
       </HydrationBoundary>
