@@ -9,9 +9,7 @@ export function NavLinks({ links }: { links: { href: string; label: string }[] }
       {links.map((l) => {
         const active = pathname === l.href || pathname.startsWith(`${l.href}/`);
         return (
-          // A full prefetch is one request per link; the default for these dynamic pages asks
-          // twice (the route tree, then its metadata).
-          <Link key={l.href} href={l.href} prefetch aria-current={active ? "page" : undefined}
+          <Link key={l.href} href={l.href} aria-current={active ? "page" : undefined}
             className={`rounded-md px-3 py-1.5 whitespace-nowrap transition-colors ${active ? "bg-white/10 text-header-text shadow-[inset_0_-2px_0_var(--c-brass)] night:bg-transparent" : "text-header-text/80 hover:bg-white/5 hover:text-header-text"}`}>
             {l.label}
           </Link>
