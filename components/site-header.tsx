@@ -28,9 +28,9 @@ export async function SiteHeader({ night }: { night: boolean }) {
         />
         <div className="ml-auto flex items-center gap-3 text-sm">
           {user ? (
-            <span className="hidden text-header-text/75 sm:inline" title={user.email}>
+            <span className="hidden text-header-text/80 sm:inline" title={user.email}>
               {user.name}
-              {user.role !== "member" && <span className="ml-1.5 rounded bg-brass/25 px-1.5 py-0.5 text-xs uppercase tracking-wide">{user.role}</span>}
+              {user.role !== "member" && <span className="ml-1.5 rounded bg-brass/25 px-1.5 py-0.5 text-xs uppercase tracking-wide text-header-text night:bg-transparent night:ring-1 night:ring-brass">{user.role}</span>}
             </span>
           ) : null}
           <NightToggle initial={night} />

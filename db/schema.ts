@@ -3,6 +3,7 @@ import {
   boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex,
 } from "drizzle-orm/pg-core";
 import type { PartSpecs } from "@/lib/validation/parts";
+import { searchCompactSql, searchWordsSql } from "./search-sql";
 
 // ── Accounts (the tables better-auth reads and writes; see lib/auth.ts) ─────────────────
 
@@ -122,6 +123,9 @@ export const parts = pgTable("parts", {
   index("parts_front_idx").on(t.frontInterface),
   index("parts_rear_idx").on(t.rearInterface),
   index("parts_maker_model_idx").on(t.maker, t.model),
+  // Part search (db/search-sql.ts): trigram indexes over the normalised words, with and without spaces.
+  index("parts_search_trgm_idx").using("gin", sql`${searchWordsSql(t)} gin_trgm_ops`),
+  index("parts_search_compact_trgm_idx").using("gin", sql`${searchCompactSql(t)} gin_trgm_ops`),
 ]);
 
 /** One row: bumped whenever the set of approved parts or an approved part changes. */

@@ -19,6 +19,8 @@ export type InterfaceSpec = {
   /** Bayonets and camera screw mounts: published flange focal distance, mm. */
   flangeFocalMm?: number;
   note?: string;
+  /** What people call it where the code is not what they would write ("SCT 2\"-24"). */
+  short?: string;
 };
 
 const INCH_MM = 25.4;
@@ -34,9 +36,9 @@ export const INTERFACES: readonly InterfaceSpec[] = [
   { code: "M63x1", name: "M63 × 1", kind: "thread", diameterMm: 63, pitchMm: 1 },
   { code: "M68x1", name: "M68 × 1", kind: "thread", diameterMm: 68, pitchMm: 1 },
   { code: "M82x1", name: "M82 × 1", kind: "thread", diameterMm: 82, pitchMm: 1 },
-  { code: "2in-24tpi", name: "2\"-24 Schmidt–Cassegrain thread", kind: "thread", diameterMm: 2 * INCH_MM, pitchMm: INCH_MM / 24,
+  { code: "2in-24tpi", name: "2\"-24 Schmidt–Cassegrain thread", kind: "thread", diameterMm: 2 * INCH_MM, pitchMm: INCH_MM / 24, short: "SCT 2\"-24",
     note: "2\"-24 UNS: pitch 25.4/24 = 1.0583 mm." },
-  { code: "3.25in-24tpi", name: "3.25\"-24 large Schmidt–Cassegrain thread", kind: "thread", diameterMm: 3.25 * INCH_MM, pitchMm: INCH_MM / 24 },
+  { code: "3.25in-24tpi", name: "3.25\"-24 large Schmidt–Cassegrain thread", kind: "thread", diameterMm: 3.25 * INCH_MM, pitchMm: INCH_MM / 24, short: "SCT 3.25\"-24" },
   { code: "barrel-1.25in", name: "1.25-inch barrel", kind: "barrel", diameterMm: 1.25 * INCH_MM, pitchMm: null,
     note: "Male: the nosepiece; female: the holder that clamps it." },
   { code: "barrel-2in", name: "2-inch barrel", kind: "barrel", diameterMm: 2 * INCH_MM, pitchMm: null,
@@ -62,22 +64,30 @@ export function isKnownInterface(code: string): boolean {
   return BY_CODE.has(code);
 }
 
-/** A short label for a joint: "M48x0.75", "2-inch barrel". */
+/** A short label for a joint: "M48x0.75", "SCT 2\"-24", "2-inch barrel". */
 export function interfaceLabel(code: string): string {
   const spec = BY_CODE.get(code);
   if (!spec) return code;
-  return spec.kind === "thread" ? code : spec.name;
+  return spec.short ?? (spec.kind === "thread" ? code : spec.name);
 }
 
 /**
- * Our own colour rule for interface families: the nominal diameter picks a stop on a wheel
- * that skips the reds and ambers (kept for warnings), so neighbouring sizes look related.
- * The code is always written beside the colour; colour alone never carries the meaning.
+ * Our own colour rule: every interface has its own hue on a wheel that skips the reds and
+ * ambers (kept for warnings). Look-alikes that do not mate sit far apart on the wheel
+ * (M42×0.75 vs M42×1; 2-inch barrel vs M48 vs SCT 2"-24). The label is always written beside
+ * the colour; colour alone never carries the meaning (and night mode paints them all red).
  */
-const HUE_STOPS = [188, 205, 222, 240, 258, 276, 294, 312, 52, 72, 92, 112, 140, 165];
+const HUES: Record<string, number> = {
+  "2in-24tpi": 60, "M82x1": 108, "M56x1": 84, "M48x0.75": 132, "bayonet-ef": 148, "M54x0.75": 164,
+  "bayonet-f": 180, "M42x0.75": 196, "bayonet-e": 204, "barrel-1.25in": 214, "barrel-2in": 228,
+  "bayonet-rf": 238, "M63x1": 252, "bayonet-z": 264, "M68x1": 276, "bayonet-x": 288,
+  "3.25in-24tpi": 298, "bayonet-mft": 308, "M42x1": 320,
+};
 export function interfaceHue(code: string): number {
-  const spec = BY_CODE.get(code);
-  const d = spec?.diameterMm ?? 40;
-  const t = Math.min(1, Math.max(0, (d - 30) / 55));
-  return HUE_STOPS[Math.round(t * (HUE_STOPS.length - 1))];
+  return HUES[code] ?? 200;
 }
+
+/** Pairs that look alike or share a size but do not mate: their colours must differ most. */
+export const LOOK_ALIKES: readonly (readonly string[])[] = [
+  ["M42x0.75", "M42x1"], ["barrel-2in", "M48x0.75", "2in-24tpi"], ["bayonet-ef", "bayonet-rf"], ["bayonet-f", "bayonet-x"],
+];

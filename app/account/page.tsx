@@ -42,7 +42,10 @@ export default async function AccountPage() {
         <Card>
           <h2 className="font-medium text-ink">Submit a missing part</h2>
           <p className="mt-1 text-sm text-muted">Send its numbers and a spec sheet; a moderator checks it before it joins the catalog.</p>
-          <Link href="/parts/submit" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">Submit a part</Link>
+          <div className="mt-3 flex flex-wrap gap-x-4 text-sm">
+            <Link href="/parts/submit" className="underline decoration-brass underline-offset-4">Submit a part</Link>
+            <Link href="/account/submissions" className="underline decoration-brass underline-offset-4">My submissions</Link>
+          </div>
         </Card>
       </div>
     </div>

@@ -57,7 +57,7 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
             Only mine
           </label>
         ) : null}
-        <button type="submit" className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-bg hover:bg-ink/90 night:bg-brass night:text-black">Filter</button>
+        <button type="submit" className="rounded-md bg-ink px-4 py-2 text-sm font-medium text-bg hover:bg-ink/90">Filter</button>
         {query.q || query.reference || mine ? <Link href="/builds" className="py-2 text-sm text-muted underline underline-offset-4">Clear</Link> : null}
       </form>
 

@@ -5,7 +5,7 @@ import { InterfaceChip } from "@/components/parts/interface-chip";
 import { ReviewActions } from "@/components/review/review-actions";
 import { PageTitle } from "@/components/ui/card";
 import { allowed, getSessionUser } from "@/lib/auth/session";
-import { KIND_LABELS } from "@/lib/format";
+import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 
 export const metadata = { title: "Review" };
@@ -37,6 +37,8 @@ export default async function ReviewPage() {
                   <span>Sensor side: {part.rearInterface ? <InterfaceChip code={part.rearInterface} gender={part.rearGender as "male" | "female"} /> : "—"}</span>
                   <span className="num">Length {formatMm(part.lengthMm, 2)}{part.adjustMm ? ` + ${part.adjustMm} adjustable` : ""}</span>
                   {part.clearApertureMm ? <span className="num">Clear aperture {formatMm(part.clearApertureMm)}</span> : null}
+                  <span className="num">Weight {part.weightG !== null ? formatGrams(part.weightG) : "not given"}</span>
+                  <span>{part.reversible ? "Reversible (fits either way round)" : "One way round only"}</span>
                 </div>
                 {Object.keys(part.specs).length ? <pre className="code overflow-x-auto rounded bg-sunken p-2 text-xs">{JSON.stringify(part.specs, null, 1)}</pre> : null}
                 {part.description ? <p className="italic">“{part.description}”</p> : null}

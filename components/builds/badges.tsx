@@ -14,12 +14,14 @@ export function VisibilityBadge({ visibility }: { visibility: string }) {
   return <span className="rounded-full border border-line px-2.5 py-0.5 text-xs text-muted">{label}</span>;
 }
 
+// Fit states differ by shape, fill and words as well as colour: night mode shows every
+// state in the same red, so an outlined tick and a filled cross must tell them apart.
 export function FitBadge({ fits }: { fits: boolean }) {
   return fits
-    ? <span className="rounded-full bg-ok/10 px-2.5 py-0.5 text-xs font-medium text-ok">Still fits</span>
-    : <span className="rounded-full bg-bad/10 px-2.5 py-0.5 text-xs font-semibold text-bad">No longer fits</span>;
+    ? <span data-state="fits" className="inline-flex items-center gap-1 rounded-full border border-ok/60 px-2.5 py-0.5 text-xs font-medium text-ok"><span aria-hidden>✓</span>Still fits</span>
+    : <span data-state="broken" className="inline-flex items-center gap-1 rounded-full bg-bad px-2.5 py-0.5 text-xs font-bold text-bg"><span aria-hidden>✕</span>No longer fits</span>;
 }
 
 export function HiddenBadge() {
-  return <span className="rounded-full bg-warn/15 px-2.5 py-0.5 text-xs font-semibold text-warn">Hidden</span>;
+  return <span className="inline-flex items-center gap-1 rounded-full border border-dashed border-warn px-2.5 py-0.5 text-xs font-semibold text-warn"><span aria-hidden>⊘</span>Hidden</span>;
 }

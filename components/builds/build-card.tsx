@@ -6,6 +6,12 @@ import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "./badges
 
 const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
+/** The error in words: a signed zero read like a zero tolerance ("±0.00"). */
+export function offTarget(errorMm: number): string {
+  if (Math.abs(errorMm) < 0.005) return "on target";
+  return `${signedMm(errorMm)} mm from target`;
+}
+
 /** One build in a list: what it joins, where the sensor lands, who saved it. */
 export function BuildCard({ build, showVisibility = false }: { build: BuildSummary; showVisibility?: boolean }) {
   const inside = build.errorMm === null || build.toleranceMm === null || Math.abs(build.errorMm) <= build.toleranceMm + 1e-6;
@@ -29,11 +35,14 @@ export function BuildCard({ build, showVisibility = false }: { build: BuildSumma
       <dl className="mt-auto grid grid-cols-3 gap-2 border-t border-line pt-3 text-sm">
         <div>
           <dt className="text-xs text-muted">Sensor at</dt>
-          <dd className={`num font-semibold ${inside ? "text-ok" : "text-bad"}`}>{build.sensorDistanceMm?.toFixed(2) ?? "—"} mm</dd>
+          <dd className={`num font-semibold ${inside ? "text-ok" : "text-bad"}`}>
+            <span aria-hidden>{inside ? "✓ " : "✕ "}</span>{build.sensorDistanceMm?.toFixed(2) ?? "—"} mm
+          </dd>
+          {build.errorMm !== null ? <dd className="num text-xs text-muted">{offTarget(build.errorMm)}</dd> : null}
         </div>
         <div>
           <dt className="text-xs text-muted">Target</dt>
-          <dd className="num">{build.targetMm !== null ? `${build.targetMm.toFixed(2)}` : "—"}{build.errorMm !== null ? <span className="text-xs text-muted"> ({signedMm(build.errorMm)})</span> : null}</dd>
+          <dd className="num">{build.targetMm !== null ? <>{build.targetMm.toFixed(2)}{build.toleranceMm !== null ? <span className="text-muted"> ± {build.toleranceMm.toFixed(2)}</span> : null} mm</> : "—"}</dd>
         </div>
         <div>
           <dt className="text-xs text-muted">Parts · price</dt>

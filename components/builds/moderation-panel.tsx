@@ -37,7 +37,8 @@ export function ModerationPanel({ slug, endorsed, hidden, threads, compact = fal
           <Button variant="secondary" disabled={!!busy} onClick={() => act("endorse", "DELETE", "/endorse", undefined, "Endorsement withdrawn.")}>
             {busy === "endorse" ? "Withdrawing…" : "Withdraw endorsement"}
           </Button>
-        ) : (
+        ) : hidden ? null : (
+          // A hidden build is not a reference for anyone: show it again before endorsing it.
           <Button disabled={!!busy} onClick={() => act("endorse", "POST", "/endorse", undefined, "Endorsed as a reference build.")}>
             {busy === "endorse" ? "Endorsing…" : "Endorse as reference"}
           </Button>

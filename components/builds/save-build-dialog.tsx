@@ -48,7 +48,7 @@ export function SaveBuildButton({ request, solutionIndex, signedIn, defaultTitle
     setSaved({ ...res.data, visibility: form.visibility, title: form.title });
   }
 
-  const snippet = saved && { title: saved.title, url: saved.url, imageUrl: `${saved.url}/opengraph-image` };
+  const snippet = saved && { title: saved.title, url: saved.url, imageUrl: `${saved.url}/opengraph-image`, endorsed: false };
   return (
     <>
       <Button type="button" onClick={open} disabled={!request} className={className}>Save as link</Button>

@@ -2,7 +2,9 @@
 import { CopyButton } from "./copy-button";
 
 /** The link and ready-made snippets (link + preview image) for forums and pages. */
-export function SharePanel({ url, markdown, html, previewable }: { url: string; markdown: string; html: string; previewable: boolean }) {
+export function SharePanel({ url, markdown, html, previewable, noPreviewReason = "private" }: {
+  url: string; markdown: string; html: string; previewable: boolean; noPreviewReason?: "private" | "hidden";
+}) {
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-2">
@@ -16,7 +18,9 @@ export function SharePanel({ url, markdown, html, previewable }: { url: string; 
           <CopyButton text={html} label="Copy HTML" />
         </div>
       ) : (
-        <p className="text-xs text-muted">Private builds have no preview image: make the build unlisted or public to paste it with a picture.</p>
+        <p className="text-xs text-muted">{noPreviewReason === "hidden"
+          ? "A moderator hid this build, so it has no preview image and only you and moderators can open the link. It gets its picture back if a moderator shows it again."
+          : "Private builds have no preview image: make the build unlisted or public to paste it with a picture."}</p>
       )}
     </div>
   );

@@ -1,6 +1,7 @@
 // The saved train, drawn on the server: sky left, sensor right, boxes to scale behind the
 // optics, each joint labelled with its interface code, and the back-focus ruler underneath.
-import { getInterface, interfaceHue } from "@/lib/interfaces";
+import { interfaceHue, interfaceLabel } from "@/lib/interfaces";
+import { MIN_LEADER_GAP, layoutCallouts } from "@/lib/builds/label-layout";
 import { genderSign, landsInside, signedMm, type BuildTrain, type TrainItem } from "@/lib/builds/train";
 import type { Chain } from "@/lib/solver/types";
 
@@ -10,16 +11,23 @@ const HEIGHT: Record<TrainItem["role"], number> = { telescope: 80, optics: 108, 
 
 type Placed = TrainItem & { x: number; w: number };
 
-/** Greedy rows so labels never overlap: each goes in the first row with room. */
-function rows<T extends { cx: number; width: number }>(labels: T[]): (T & { row: number })[] {
-  const ends: number[] = [];
-  return labels.map((l) => {
-    const left = l.cx - l.width / 2;
-    let row = ends.findIndex((end) => left > end + 12);
-    if (row === -1) { row = ends.length; ends.push(0); }
-    ends[row] = l.cx + l.width / 2;
-    return { ...l, row };
+/**
+ * Callouts that never collide (lib/builds/label-layout.ts): leaders closer than
+ * MIN_LEADER_GAP share one label ("M48x0.75 · ♂→♀ ×3"), then rows are found outward from the train.
+ */
+function callouts(labels: { label: string; cx: number }[], px: number, mono: boolean) {
+  const groups: { texts: string[]; xs: number[] }[] = [];
+  for (const l of labels) {
+    const g = groups[groups.length - 1];
+    if (g && l.cx - g.xs[0] < MIN_LEADER_GAP) { g.texts.push(l.label); g.xs.push(l.cx); } else groups.push({ texts: [l.label], xs: [l.cx] });
+  }
+  const merged = groups.map((g) => {
+    const unique = [...new Set(g.texts)];
+    const label = unique.length === 1 && g.texts.length > 1 ? `${unique[0]} ×${g.texts.length}` : unique.join(" + ");
+    return { label, cx: (g.xs[0] + g.xs[g.xs.length - 1]) / 2, width: textWidth(label, px, mono) };
   });
+  const placed = layoutCallouts(merged, 4, W - 4);
+  return merged.map((m, i) => ({ ...m, ...placed[i], x: (placed[i].left + placed[i].right) / 2 }));
 }
 
 const shortName = (name: string, max = 22) => (name.length > max ? `${name.slice(0, max - 1)}…` : name);
@@ -69,15 +77,14 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
   }
   const sensorX = x0 + chain.sensorDistanceMm * scale;
 
-  const joints = rows(train.joints.map((j, i) => {
-    const spec = getInterface(j.code);
-    const label = `${spec?.kind === "thread" ? j.code : spec?.name ?? j.code} · ${genderSign(j.skyGender)}→${genderSign(j.sensorGender)}`;
-    return { ...j, label, cx: placed[i + 1].x, width: textWidth(label, 11, true) };
-  }));
-  const names = rows(placed.map((p) => {
-    const label = shortName(p.role === "telescope" || p.role === "optics" ? p.name.split(" ").slice(-3).join(" ") : p.name.replace(/^\S+ \S+ /, ""));
-    return { p, label, cx: p.x + p.w / 2, width: textWidth(label, 11.5) };
-  }));
+  const joints = callouts(train.joints.map((j, i) => ({
+    label: `${interfaceLabel(j.code)} · ${genderSign(j.skyGender)}→${genderSign(j.sensorGender)}`, cx: placed[i + 1].x,
+  })), 11, true);
+  const names = callouts(placed.map((p) => ({
+    label: shortName(p.role === "telescope" || p.role === "optics" ? p.name.split(" ").slice(-3).join(" ") : p.name.replace(/^\S+ \S+ /, "")),
+    cx: p.x + p.w / 2,
+  })), 11.5, false);
+  const nameRoles = new Map(placed.map((p) => [p.x + p.w / 2, p.role]));
   const jointRows = Math.max(1, ...joints.map((j) => j.row + 1));
   const top = 14 + jointRows * 17;
   const nameRows = Math.max(1, ...names.map((n) => n.row + 1));
@@ -100,7 +107,7 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
   };
 
   return (
-    <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full min-w-[880px] font-sans" role="img"
+    <svg viewBox={`0 0 ${W} ${H}`} className="h-auto w-full min-w-[720px] font-sans" role="img"
       aria-label={`The train from sky to sensor: ${train.items.map((i) => i.name).join(", then ")}. The sensor sits ${chain.sensorDistanceMm.toFixed(1)} mm behind the optics${targetMm !== null ? `; the target is ${targetMm.toFixed(2)} mm` : ""}.`}>
       <defs>
         <pattern id="filter-hatch" width="5" height="5" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
@@ -112,24 +119,29 @@ export function TrainFigure({ train, chain, targetMm, toleranceMm, filterShiftMm
       <g transform={`translate(0 ${dy})`}>
         <line x1={40} y1={CY} x2={sensorX} y2={CY} stroke="var(--c-line)" strokeDasharray="3 4" />
         {placed.map((p) => <g key={p.key}><title>{`${p.name} — ${p.lengthMm.toFixed(1)} mm${p.owned ? " (owned)" : ""}`}</title><Box p={p} /></g>)}
+        {train.joints.map((j, i) => (
+          <rect key={i} x={placed[i + 1].x - 2.5} y={CY - 16} width={5} height={32} rx={1} fill={`hsl(${interfaceHue(j.code)} 55% 45%)`} className="night:fill-brass">
+            <title>{interfaceLabel(j.code)}</title>
+          </rect>
+        ))}
         {joints.map((j, i) => {
-          const hue = interfaceHue(j.code);
-          const labelY = 14 + j.row * 17 - dy;
+          const labelY = 14 + (jointRows - 1 - j.row) * 17 - dy;
           return (
-            <g key={i}>
+            <g key={i} data-callout="joint">
               <line x1={j.cx} y1={labelY + 4} x2={j.cx} y2={CY - 20} stroke="var(--c-line)" />
-              <rect x={j.cx - 2.5} y={CY - 16} width={5} height={32} rx={1} fill={`hsl(${hue} 55% 45%)`} className="night:fill-brass" />
-              <text x={j.cx} y={labelY} fontSize={11} textAnchor="middle" fontFamily="var(--font-mono)" fill="var(--c-brass-ink)">{j.label}</text>
+              <text x={j.x} y={labelY} fontSize={11} textAnchor="middle" fontFamily="var(--font-mono)" fill="var(--c-brass-ink)">{j.label}</text>
             </g>
           );
         })}
         <line x1={sensorX} y1={CY - 40} x2={sensorX} y2={CY + 40} stroke={markerColor} strokeWidth={2} />
-        {names.map(({ p, label, cx, row }) => {
+        {names.map(({ label, cx, x, row }, i) => {
           const y = CY + 58 + row * 17;
+          const role = nameRoles.get(cx);
+          const fromY = Math.max(...placed.filter((p) => Math.abs(p.x + p.w / 2 - cx) < MIN_LEADER_GAP).map((p) => CY + HEIGHT[p.role] / 2 + 2));
           return (
-            <g key={p.key}>
-              <line x1={cx} y1={CY + HEIGHT[p.role] / 2 + 2} x2={cx} y2={y - 11} stroke="var(--c-line)" />
-              <text x={cx} y={y} fontSize={11.5} textAnchor="middle" fill={p.role === "connector" ? "var(--c-text)" : "var(--c-ink)"} fontWeight={p.role === "connector" ? 400 : 600}>{label}</text>
+            <g key={i} data-callout="name">
+              <line x1={cx} y1={fromY} x2={cx} y2={y - 11} stroke="var(--c-line)" />
+              <text x={x} y={y} fontSize={11.5} textAnchor="middle" fill={role === "connector" || !role ? "var(--c-text)" : "var(--c-ink)"} fontWeight={role === "connector" || !role ? 400 : 600}>{label}</text>
             </g>
           );
         })}

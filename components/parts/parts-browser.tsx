@@ -9,7 +9,7 @@ import { useEffect, useMemo, useState } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
 import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
-import { INTERFACES } from "@/lib/interfaces";
+import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { PART_KINDS } from "@/lib/validation/parts";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "./interface-chip";
@@ -82,12 +82,32 @@ export function PartsBrowser() {
         <label className="block"><span className="sr-only">Interface</span>
           <select className={inputClass} value={iface} onChange={(e) => setParam("interface", e.target.value)}>
             <option value="">Any interface</option>
-            {INTERFACES.map((i) => <option key={i.code} value={i.code}>{i.kind === "thread" ? i.code : i.name}</option>)}
+            {INTERFACES.map((i) => <option key={i.code} value={i.code}>{interfaceLabel(i.code)}</option>)}
           </select>
         </label>
       </div>
       {query.isError ? <p role="alert" className="text-bad">{(query.error as Error).message}</p> : null}
-      <div className="overflow-x-auto rounded-lg border border-line bg-surface">
+      {/* Phones: one card per part, nothing to scroll sideways. */}
+      <ul aria-label="Parts" className="divide-y divide-line/70 rounded-lg border border-line bg-surface sm:hidden">
+        {rows.map((p) => (
+          <li key={p.slug} data-testid="part-card" className="space-y-1.5 px-3 py-3 text-sm">
+            <Link href={`/parts/${p.slug}`} className="block font-medium text-ink underline-offset-4 hover:underline">
+              <span className="block text-xs font-normal text-muted">{p.maker} · {KIND_LABELS[p.kind] ?? p.kind}</span>{p.model}
+            </Link>
+            <div className="flex flex-wrap items-center gap-x-2 gap-y-1 text-xs">
+              {p.front ? <InterfaceChip code={p.front.interface} gender={p.front.gender} /> : <span className="text-muted">open</span>}
+              <span aria-hidden className="text-muted">→</span>
+              {p.rear ? <InterfaceChip code={p.rear.interface} gender={p.rear.gender} /> : <span className="text-muted">open</span>}
+            </div>
+            <p className="num text-xs text-muted">
+              {formatMm(p.lengthMm)}{p.adjustMm ? ` +${p.adjustMm}` : ""} long{p.clearApertureMm ? ` · ${formatMm(p.clearApertureMm)} clear` : ""}{p.weightG ? ` · ${formatGrams(p.weightG)}` : ""}
+            </p>
+          </li>
+        ))}
+        {!query.isLoading && rows.length === 0 ? <li className="px-3 py-8 text-center text-muted">No part matches. Try fewer words, or <Link className="underline" href="/parts/submit">submit the missing part</Link>.</li> : null}
+        {query.isLoading ? <li className="px-3 py-8 text-center text-muted">Loading the catalog…</li> : null}
+      </ul>
+      <div className="hidden overflow-x-auto rounded-lg border border-line bg-surface sm:block">
         <table className="w-full min-w-[760px] text-left text-sm">
           <thead className="border-b border-line bg-sunken text-xs uppercase tracking-wide text-muted">
             {table.getHeaderGroups().map((hg) => (

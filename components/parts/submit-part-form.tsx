@@ -4,8 +4,9 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import { KIND_LABELS } from "@/lib/format";
-import { INTERFACES } from "@/lib/interfaces";
+import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { FILTER_SIZES, OPTICS_ROLES, PART_KINDS, partFormSchema, type PartInput } from "@/lib/validation/parts";
+import { humanIssue } from "@/lib/validation/messages";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
 
@@ -23,7 +24,7 @@ export function SubmitPartForm() {
   const [fileError, setFileError] = useState<string | null>(null);
   const [result, setResult] = useState<{ ok: boolean; text: string; slug?: string } | null>(null);
   const { register, handleSubmit, watch, setError, formState: { errors, isSubmitting } } = useForm<FormValues>({
-    resolver: zodResolver(partFormSchema as never) as unknown as Resolver<FormValues>,
+    resolver: zodResolver(partFormSchema as never, { error: humanIssue } as never) as unknown as Resolver<FormValues>,
     defaultValues: { kind: "adapter", reversible: false, front: { interface: "", gender: "female" }, rear: { interface: "", gender: "male" }, specs: {} },
   });
   const kind = watch("kind");
@@ -38,10 +39,12 @@ export function SubmitPartForm() {
     const res = await fetch("/api/v1/submissions", { method: "POST", body });
     const json = await res.json();
     if (!res.ok) {
-      for (const [path, msgs] of Object.entries((json.error?.fields ?? {}) as Record<string, string[]>)) {
+      const fields = Object.entries((json.error?.fields ?? {}) as Record<string, string[]>);
+      for (const [path, msgs] of fields) {
         if (path === "specSheet") setFileError(msgs[0]); else setError(path as never, { message: msgs[0] });
       }
-      setResult({ ok: false, text: json.error?.message ?? "The submission failed." });
+      // Each field's message shows beside it; the top line only points there, so nothing reads twice.
+      setResult({ ok: false, text: fields.length ? "Nothing was sent yet: see the marked fields below." : json.error?.message ?? "The submission failed." });
       return;
     }
     setResult({ ok: true, slug: json.slug, text: json.probableDuplicateOf
@@ -57,7 +60,7 @@ export function SubmitPartForm() {
       <div className="grid grid-cols-[1fr_auto] gap-2">
         <select aria-label={`${label} interface`} className={inputClass} {...register(`${side}.interface` as const)}>
           <option value="">No face here</option>
-          {INTERFACES.map((i) => <option key={i.code} value={i.code}>{i.kind === "thread" ? i.code : i.name}</option>)}
+          {INTERFACES.map((i) => <option key={i.code} value={i.code}>{interfaceLabel(i.code)}</option>)}
         </select>
         <select aria-label={`${label} gender`} className={inputClass} {...register(`${side}.gender` as const)}>
           <option value="male">male</option><option value="female">female</option>

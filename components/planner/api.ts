@@ -48,7 +48,9 @@ export async function searchParts(kinds: readonly string[], q: string, signal: A
     if (q.trim()) sp.set("q", q.trim());
     return fetchJson<PartsPage>(`/api/v1/parts?${sp}`, { signal });
   }));
-  return pages.flatMap((p) => p.items);
+  // Each kind comes back best match first; merge them by the server's match score.
+  const items = pages.flatMap((p) => p.items as (ApiPart & { matchScore?: number })[]);
+  return q.trim() ? items.sort((a, b) => (b.matchScore ?? 0) - (a.matchScore ?? 0)) : items;
 }
 
 export type CorrectorJoins = { telescope: string; correctors: { slug: string; joins: boolean; adapters: number }[] };

@@ -34,6 +34,14 @@ export function facesText(p: Pick<ApiPart, "front" | "rear">): string {
   return `${face(p.front)} → ${face(p.rear)}`;
 }
 
+/** The first text field or select that follows `anchor` in the page (outside it), if any. */
+function focusFieldAfter(anchor: Element) {
+  const fields = document.querySelectorAll<HTMLElement>("input:not([type=hidden]):not([disabled]), select:not([disabled]), textarea:not([disabled])");
+  for (const f of fields) {
+    if (!anchor.contains(f) && anchor.compareDocumentPosition(f) & Node.DOCUMENT_POSITION_FOLLOWING && f.offsetParent !== null) { f.focus(); return; }
+  }
+}
+
 export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFocus, hint, mark }: Props) {
   const id = useId();
   const listId = `${id}-list`;
@@ -61,11 +69,14 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
   const activeIndex = Math.min(active, options.length - 1);
 
   function pick(p: ApiPart) {
+    const stop = inputRef.current?.closest("li") ?? inputRef.current;
     queryClient.setQueryData(["part", p.slug], p);
     onPick(p);
     setText("");
     setOpen(false);
     setActive(-1);
+    // Once the choice has rendered, carry on to the next field of the form.
+    if (stop) requestAnimationFrame(() => requestAnimationFrame(() => focusFieldAfter(stop)));
   }
 
   function onKeyDown(e: React.KeyboardEvent<HTMLInputElement>) {
@@ -75,6 +86,13 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
       const n = options.length;
       if (n) setActive(activeIndex < 0 ? (e.key === "ArrowDown" ? 0 : n - 1) : (activeIndex + (e.key === "ArrowDown" ? 1 : n - 1)) % n);
     } else if (e.key === "Enter") {
+      if (open && activeIndex < 0 && text.trim() && (q !== text || query.isFetching)) {
+        // The list on screen is for an older text: pick the best match for what was typed.
+        e.preventDefault();
+        void queryClient.fetchQuery({ queryKey: ["parts-search", kinds.join("+"), text], queryFn: ({ signal }) => searchParts(kinds, text, signal), staleTime: 60_000 })
+          .then((all) => { const best = (accept ? all.filter(accept) : all)[0]; if (best) pick(best); }, () => undefined);
+        return;
+      }
       const chosen = options[activeIndex] ?? (text.trim() ? options[0] : undefined);
       if (open && chosen) { e.preventDefault(); pick(chosen); }
     } else if (e.key === "Escape") {
@@ -108,7 +126,8 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
         value={text}
         onChange={(e) => { setText(e.target.value); setOpen(true); setActive(-1); }}
         onClick={() => setOpen(true)}
-        onBlur={() => setTimeout(() => setOpen(false), 120)}
+        // Close after a click on an option has landed, unless the focus came back meanwhile.
+        onBlur={() => setTimeout(() => { if (document.activeElement !== inputRef.current) setOpen(false); }, 120)}
         onKeyDown={onKeyDown}
       />
       {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}

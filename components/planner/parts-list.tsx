@@ -51,7 +51,7 @@ export function PartsList({ train, unit, owned, currency, missing = null, names 
     <>{note}
     <div className="grid gap-4 md:grid-cols-2">
       <div>
-        <h4 className="mb-1.5 text-xs font-semibold uppercase tracking-wide text-muted">To buy</h4>
+        <h3 className="mb-1.5 text-xs font-semibold uppercase tracking-wide text-muted">To buy</h3>
         {buy.length ? (
           <table className="w-full text-sm">
             <caption className="sr-only">Parts to buy, at list prices</caption>
@@ -74,7 +74,7 @@ export function PartsList({ train, unit, owned, currency, missing = null, names 
         ) : <p className="text-sm text-ok">Nothing: you own every connector this chain needs.</p>}
       </div>
       <div>
-        <h4 className="mb-1.5 text-xs font-semibold uppercase tracking-wide text-muted">Already yours</h4>
+        <h3 className="mb-1.5 text-xs font-semibold uppercase tracking-wide text-muted">Already yours</h3>
         {own.length ? (
           <ul className="space-y-1 text-sm">
             {own.map((l) => <li key={l.id} className="flex justify-between gap-2 border-b border-line/70 py-1.5"><span>{l.count > 1 ? `${l.count} × ` : ""}{l.name}</span><span className="num text-muted">{formatLength(l.lengthMm, unit)}</span></li>)}

@@ -37,7 +37,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         <div role="radiogroup" aria-label="Units" className="inline-flex rounded-md border border-line p-0.5 text-xs">
           {(["mm", "in"] as const).map((u) => (
             <button key={u} type="button" role="radio" aria-checked={unit === u} onClick={() => onUnit(u)}
-              className={`rounded px-2.5 py-1 ${unit === u ? "bg-ink text-bg night:bg-brass night:text-black" : "text-muted hover:text-text"}`}>
+              className={`rounded px-2.5 py-1 ${unit === u ? "bg-ink text-bg" : "text-muted hover:text-text"}`}>
               {u === "mm" ? "Millimetres" : "Inches"}
             </button>
           ))}

@@ -3,7 +3,7 @@ import type { ComponentProps } from "react";
 
 type Variant = "primary" | "secondary" | "ghost" | "danger";
 const styles: Record<Variant, string> = {
-  primary: "bg-ink text-bg hover:bg-ink/90 night:bg-brass night:text-black",
+  primary: "bg-ink text-bg hover:bg-ink/90",
   secondary: "border border-line bg-surface text-text hover:border-brass",
   ghost: "text-text hover:bg-sunken",
   danger: "border border-bad/40 bg-surface text-bad hover:bg-bad/10",

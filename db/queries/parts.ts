@@ -1,34 +1,33 @@
 import "server-only";
-import { and, asc, eq, gt, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogState, parts } from "@/db/schema";
 import { rowToApiPart } from "@/lib/catalog/rows";
+import { parseSearch } from "@/lib/search/normalize";
+import { searchApprovedParts } from "./part-search";
 import { AppError } from "@/lib/errors";
 import { isUuid } from "@/lib/validation/ids";
 import { hasNul } from "@/lib/validation/nul";
 import { decodeCursor, encodeCursor, type ListPartsQuery } from "@/lib/validation/catalog";
 
-function escapeLike(s: string) {
-  return s.replace(/[\\%_]/g, (c) => `\\${c}`);
-}
-
-/** Approved parts, filtered and keyset-paged by slug. */
+/**
+ * Approved parts, filtered. With a search: best match first (db/queries/part-search.ts),
+ * paged by offset; without: keyset-paged by slug.
+ */
 export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
-  const where: SQL[] = [eq(parts.status, "approved")];
+  const where: SQL[] = [];
   if (query.kind) where.push(eq(parts.kind, query.kind));
   if (query.interface) where.push(or(eq(parts.frontInterface, query.interface), eq(parts.rearInterface, query.interface))!);
-  if (query.q) {
-    for (const word of query.q.split(/\s+/).filter(Boolean).slice(0, 6)) {
-      const like = `%${escapeLike(word)}%`;
-      where.push(or(ilike(parts.maker, like), ilike(parts.model, like), ilike(parts.slug, like), ilike(parts.kind, like),
-        ilike(parts.frontInterface, like), ilike(parts.rearInterface, like))!);
-    }
+  const search = query.q ? parseSearch(query.q) : null;
+  const after = query.cursor ? decodeCursor(query.cursor) : null;
+  if (query.cursor && after === null) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+  if (search) {
+    const offset = after?.startsWith("#") ? Number(after.slice(1)) || 0 : 0;
+    const found = await searchApprovedParts({ search, where, limit: query.limit, offset });
+    return { items: found.items, nextCursor: found.nextOffset === null ? null : encodeCursor(`#${found.nextOffset}`) };
   }
-  if (query.cursor) {
-    const after = decodeCursor(query.cursor);
-    if (after === null) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
-    where.push(gt(parts.slug, after));
-  }
+  where.push(eq(parts.status, "approved"));
+  if (after && !after.startsWith("#")) where.push(gt(parts.slug, after));
   const rows = await db.select().from(parts).where(and(...where)).orderBy(asc(parts.slug)).limit(query.limit + 1);
   const page = rows.slice(0, query.limit);
   return {

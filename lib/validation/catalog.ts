@@ -18,8 +18,11 @@ export type ListPartsQuery = z.infer<typeof listPartsQuerySchema>;
 export function encodeCursor(slug: string): string {
   return Buffer.from(slug, "utf8").toString("base64url");
 }
-/** The slug a cursor names, or null when it names none (slugs are lowercase letters, digits and dashes). */
+/**
+ * What a cursor names — a slug (keyset paging) or `#<offset>` (paging ranked search results) —
+ * or null when it names neither (slugs are lowercase letters, digits and dashes).
+ */
 export function decodeCursor(cursor: string): string | null {
   const slug = Buffer.from(cursor, "base64url").toString("utf8");
-  return /^[a-z0-9][a-z0-9-]{0,199}$/.test(slug) ? slug : null;
+  return /^(#\d{1,6}|[a-z0-9][a-z0-9-]{0,199})$/.test(slug) ? slug : null;
 }

@@ -112,14 +112,14 @@ describe("user text in snippets and the preview image (issue 13 item 5)", () => 
   const url = "http://127.0.0.1:3000/b/abc123";
   const imageUrl = `${url}/opengraph-image`;
   it("escapes a title in the HTML snippet", () => {
-    const html = htmlSnippet({ title: hostile, url, imageUrl });
+    const html = htmlSnippet({ title: hostile, url, imageUrl, endorsed: true });
     expect(html).not.toContain("<script>");
     expect(html).not.toContain('"onerror="');
     expect(html).toContain("&lt;script&gt;");
     expect(html.match(/<a /g)).toHaveLength(2);
   });
   it("escapes a title in the Markdown snippet so it cannot add links or images", () => {
-    const md = markdownSnippet({ title: hostile, url, imageUrl });
+    const md = markdownSnippet({ title: hostile, url, imageUrl, endorsed: true });
     // The only unescaped link targets are the build and its image.
     const targets = [...md.matchAll(/(?<!\\)\]\(([^)]*)\)/g)].map((m) => m[1]);
     expect(new Set(targets)).toEqual(new Set([url, imageUrl]));

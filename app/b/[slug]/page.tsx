@@ -12,6 +12,7 @@ import { PartsList } from "@/components/builds/parts-list";
 import { BuildWhereToBuy } from "@/components/shops/build-where-to-buy";
 import { SharePanel } from "@/components/builds/share-panel";
 import { TrainFigure } from "@/components/builds/train-figure";
+import { TrainList } from "@/components/builds/train-list";
 import { SafetyNote } from "@/components/safety-note";
 import { ButtonLink } from "@/components/ui/button";
 import { canDeleteBuild, hasPublicPreview } from "@/lib/builds/access";
@@ -66,8 +67,9 @@ export default async function BuildPage({ params }: Props) {
   const chain = chosenChain(result, build.solutionIndex);
   if (!chain) notFound();
   const origin = siteOrigin(await headers());
-  const snippet = { title: build.title, url: buildUrl(origin, build.slug), imageUrl: buildImageUrl(origin, build.slug) };
+  const snippet = { title: build.title, url: buildUrl(origin, build.slug), imageUrl: buildImageUrl(origin, build.slug), endorsed: !!build.endorsedAt };
   const lines = shoppingList(result, chain);
+  const train = buildTrainOf(result, chain);
 
   return (
     <article className="space-y-6">
@@ -108,10 +110,13 @@ export default async function BuildPage({ params }: Props) {
 
       <section aria-labelledby="train-heading" className="rounded-lg border border-line bg-surface p-4">
         <h2 id="train-heading" className="sr-only">The train</h2>
-        <div className="overflow-x-auto">
-          <TrainFigure train={buildTrainOf(result, chain)} chain={chain} targetMm={result.targetMm} toleranceMm={result.toleranceMm} filterShiftMm={result.filterShiftMm} />
+        {/* Phones get the train as a list; the drawing needs about 640 px to stay legible. */}
+        <TrainList train={train} className="sm:hidden" />
+        <p className="mt-2 text-xs text-muted sm:hidden">Sky at the top, sensor at the bottom; each joint gives the thread or barrel and which side is male (♂) or female (♀). The sensor lands at <span className="num">{chain.sensorDistanceMm.toFixed(2)} mm</span>.</p>
+        <div className="hidden overflow-x-auto sm:block" tabIndex={0} role="region" aria-label="Train drawing">
+          <TrainFigure train={train} chain={chain} targetMm={result.targetMm} toleranceMm={result.toleranceMm} filterShiftMm={result.filterShiftMm} />
         </div>
-        <p className="mt-2 text-xs text-muted"><span className="sm:hidden">Drag sideways to follow the train to the sensor. </span>Sky on the left, sensor on the right. Behind the optics every box is drawn to scale; joint labels give the thread or barrel and which side is male (♂) or female (♀).</p>
+        <p className="mt-2 hidden text-xs text-muted sm:block">Sky on the left, sensor on the right. Behind the optics every box is drawn to scale; joint labels give the thread or barrel and which side is male (♂) or female (♀).</p>
       </section>
 
       {chain.warnings.length ? (
@@ -144,7 +149,8 @@ export default async function BuildPage({ params }: Props) {
           <BuildWhereToBuy lines={lines.filter((l) => l.toBuy).map((l) => ({ slug: l.item.slug, name: l.item.name, count: l.count }))} />
           <section aria-labelledby="share-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">
             <h2 id="share-heading" className="font-semibold text-ink">Share</h2>
-            <SharePanel url={snippet.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={hasPublicPreview(build)} />
+            <SharePanel url={snippet.url} markdown={markdownSnippet(snippet)} html={htmlSnippet(snippet)} previewable={hasPublicPreview(build)}
+              noPreviewReason={build.hiddenAt ? "hidden" : "private"} />
           </section>
           {owner ? (
             <section aria-labelledby="owner-heading" className="space-y-3 rounded-lg border border-line bg-surface p-4">

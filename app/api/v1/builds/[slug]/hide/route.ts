@@ -2,6 +2,7 @@
 import { getBuildOrThrow, setBuildHidden } from "@/db/queries/builds";
 import { parseJsonBody, withSession } from "@/lib/auth/session";
 import { toBuildViewer } from "@/lib/builds/access";
+import { notifyBuildOwner } from "@/lib/builds/moderation-mail";
 import { hideBuildSchema } from "@/lib/validation/builds";
 
 export const dynamic = "force-dynamic";
@@ -11,6 +12,7 @@ export const POST = withSession<Params>(async (request, { user, params }) => {
   const { build } = await getBuildOrThrow({ slug: params.slug, viewer: toBuildViewer(user) });
   const { reason } = await parseJsonBody(request, hideBuildSchema, 10_000);
   await setBuildHidden({ buildId: build.id, actorId: user.id, reason });
+  if (!build.hiddenAt) await notifyBuildOwner({ build, actorId: user.id, event: { kind: "hidden", reason } });
   return Response.json({ slug: build.slug, hidden: true, hiddenReason: reason });
 }, { permission: { build: "moderate" } });
 

@@ -1,0 +1,45 @@
+// The answer in the first paint: a plan link's answer is in the server's HTML, and the page
+// shows it without asking the solve API; edits still go to the API.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { DEMO_CASES } from "@/seed/catalog";
+import { launch, watchErrors } from "../support/browser";
+import { BASE_URL } from "../support/http";
+
+const f = DEMO_CASES.flagship;
+const FLAGSHIP = `/plan?optics=${f.telescope}&corrector=${f.optics}&camera=${f.camera}&stations=${f.stations.join(",")}&filter=${f.filterThicknessMm}&n=1.5168`;
+
+describe("the planner's first paint", () => {
+  let browser: Browser;
+  beforeAll(async () => { browser = await launch(); });
+  afterAll(async () => { await browser?.close(); });
+
+  it("carries the solved plan in the HTML, readable without JavaScript", async () => {
+    const context = await browser.newContext({ javaScriptEnabled: false });
+    const page = await context.newPage();
+    await page.goto(`${BASE_URL}${FLAGSHIP}`);
+    expect(await page.getByTestId("plan-verdict").getAttribute("data-status")).toBe("ok");
+    expect(await page.getByTestId("plan-verdict").textContent()).toMatch(/Reaches focus/);
+    expect(await page.textContent("body")).toContain("Carousel 7 × 2in");
+    await context.close();
+  });
+
+  it("hydrates without a solve request or part look-ups, then solves edits through the API", async () => {
+    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const errors = watchErrors(page);
+    const hydration: string[] = [];
+    page.on("console", (m) => { if (m.type() === "error" && /hydrat/i.test(m.text())) hydration.push(m.text()); });
+    const asked: string[] = [];
+    page.on("request", (r) => { if (r.url().includes("/api/v1/")) asked.push(`${r.method()} ${new URL(r.url()).pathname}`); });
+    await page.goto(`${BASE_URL}${FLAGSHIP}`);
+    await page.waitForLoadState("networkidle");
+    await page.waitForSelector('#plan-answer[aria-busy="false"] [data-testid="plan-verdict"][data-status="ok"]');
+    expect(asked).toEqual([]);
+    await page.getByRole("group", { name: "Filter in the beam: thickness" }).getByRole("button", { name: "3 mm glass" }).click();
+    await page.waitForRequest((r) => r.url().endsWith("/api/v1/solve") && r.method() === "POST");
+    await page.waitForSelector('#plan-answer[aria-busy="false"] [data-testid="plan-verdict"]');
+    expect(errors).toEqual([]);
+    expect(hydration).toEqual([]);
+    await page.close();
+  });
+});
