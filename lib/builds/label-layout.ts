@@ -56,9 +56,25 @@ export function layoutCallouts(labels: Callout[], minX = 0, maxX = Infinity): Pl
     chosen.length = 0;
     if (search(0, rows)) return chosen.map(({ row, left, right }) => ({ row, left, right }));
   }
-  // Always possible: a staircase, each label one row further out and ending just past its leader.
-  return labels.map((l, row) => {
+  return staircase(labels, minX, maxX);
+}
+
+/**
+ * The fallback when the search runs out of budget: one label per row. Either each label ends
+ * just past its leader with the leftmost nearest the train (later leaders pass to the right of
+ * every nearer label), or — when the drawing's left edge pushes a label over the next leader —
+ * each starts just before its leader with the rightmost nearest the train.
+ */
+function staircase(labels: Callout[], minX: number, maxX: number): Placed[] {
+  const n = labels.length;
+  const endingAt = labels.map((l, row) => {
     const left = Math.max(minX, l.cx - l.width + LEADER_MARGIN * 2);
     return { row, left, right: left + l.width };
+  });
+  const valid = endingAt.every((p, i) => endingAt.every((q, j) => !(j > i && labels[j].cx > p.left - LEADER_MARGIN && labels[j].cx < p.right + LEADER_MARGIN)));
+  if (valid) return endingAt;
+  return labels.map((l, i) => {
+    const left = Math.max(minX, Math.min(l.cx - LEADER_MARGIN * 2, maxX - l.width));
+    return { row: n - 1 - i, left, right: left + l.width };
   });
 }

@@ -28,6 +28,15 @@ describe("layoutCallouts", () => {
     expect(collisions(names, layoutCallouts(names, 0, 1000))).toEqual([]);
   });
 
+  it("keeps the fallback staircase clear when the drawing's left edge pushes the first label right", () => {
+    // Found by the property below: eight labels exhaust the search, and the first label, clamped
+    // at the left edge, used to reach over the second leader.
+    const raw = [[16, 52.00000000000001], [16, 20], [16, 20], [26.00000000000004, 20], [25.00000000000032, 57.000000000000384], [16, 24.000000000000014], [16, 24.000000000000014], [16, 20]];
+    let x = 20;
+    const labels = raw.map(([gap, width]) => ({ cx: (x += gap), width }));
+    expect(collisions(labels, layoutCallouts(labels, 0, Infinity))).toEqual([]);
+  });
+
   // The drawing merges joints closer than MIN_LEADER_GAP into one callout, so leaders are at least that far apart.
   it("never collides, for any train of labels", () => {
     fc.assert(fc.property(
@@ -36,6 +45,6 @@ describe("layoutCallouts", () => {
         let x = 20;
         const labels = raw.map((r) => ({ cx: (x += r.gap), width: r.width }));
         expect(collisions(labels, layoutCallouts(labels, 0, Infinity))).toEqual([]);
-      }), { numRuns: 400 });
+      }), { numRuns: 1000 });
   });
 });
