@@ -4,6 +4,8 @@ import "server-only";
 // chosen parts, under the very keys the planner asks for. The client then takes over for edits.
 import { dehydrate, QueryClient, type DehydratedState } from "@tanstack/react-query";
 import { getApprovedPartsByRefs } from "@/db/queries/parts";
+import { listShops } from "@/db/queries/shops";
+import { correctorJoins } from "@/lib/planner/corrector-joins";
 import type { SessionUser } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { runPlan, type PlanInput } from "@/lib/planner/run-plan";
@@ -19,6 +21,15 @@ export async function firstAnswer({ state, viewer }: { state: PlanState; viewer:
   if (!slugs.length) return null;
   const rows = await getApprovedPartsByRefs({ refs: slugs });
   for (const row of rows) client.setQueryData(["part", row.slug], asJson(rowToApiPart(row)));
+  // What the form itself needs to draw its choices (the shop list, which correctors join the
+  // telescope), fetched beside the solve so the page waits only for the slower of them.
+  const optics = rows.find((r) => r.slug === state.optics);
+  const side = Promise.all([
+    listShops().then((shops) => client.setQueryData(["shops"], asJson({ shops: shops.map(({ id: _id, ...s }) => s) }))),
+    optics?.specs.opticsRole === "telescope"
+      ? correctorJoins({ telescope: optics.slug }).then((j) => client.setQueryData(["corrector-joins", optics.slug], asJson(j)))
+      : null,
+  ]).catch(() => { /* the planner asks the API for them instead */ });
 
   // As the planner does: a link asking for owned parts solves with the catalog until sign-in.
   const request = planStateToSolveRequest(state.source === "owned" && !viewer ? { ...state, source: "catalog" } : state);
@@ -31,5 +42,6 @@ export async function firstAnswer({ state, viewer }: { state: PlanState; viewer:
       // A bad link (unknown part, not a corrector…): the planner asks the API and shows its message.
     }
   }
+  await side;
   return dehydrate(client);
 }
