@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, desc, eq, gt, inArray, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { member, organization, parts, quoteLines, quotes, shopInventory, shopProfiles, user, type QuoteRow } from "@/db/schema";
+import { canInShop, type ShopPermission } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 
 export type ShopRole = "owner" | "staff";
@@ -18,7 +19,7 @@ export async function getMemberShopOrThrow({ slug, userId }: { slug: string; use
   const [shop] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug }).from(organization).where(eq(organization.slug, slug));
   if (!shop) throw new AppError("not_found:shop", "No shop with this name.");
   const [m] = await db.select({ role: member.role }).from(member).where(and(eq(member.organizationId, shop.id), eq(member.userId, userId)));
-  if (!m) throw new AppError("forbidden:shop", "Only the shop's owner and staff can see its orders.");
+  if (!m || !canInShop(m.role, { order: "read" })) throw new AppError("forbidden:shop", "Only the shop's owner and staff can see its orders.");
   return { ...shop, role: m.role as ShopRole };
 }
 
@@ -89,15 +90,18 @@ export async function getQuoteForViewerOrThrow({ id, userId }: { id: string; use
   const [row] = await db.select({ quote: quotes, memberRole: member.role }).from(quotes)
     .leftJoin(member, and(eq(member.organizationId, quotes.organizationId), eq(member.userId, userId)))
     .where(eq(quotes.id, id)).limit(1);
-  if (!row || (row.quote.buyerId !== userId && !row.memberRole)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
+  // The shop's side sees it only through a role that may read orders; a stray role sees nothing.
+  const shopRole = row?.memberRole && canInShop(row.memberRole, { order: "read" }) ? row.memberRole : null;
+  if (!row || (row.quote.buyerId !== userId && !shopRole)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
   const view = await loadQuote(row.quote);
-  return { ...view, isBuyer: row.quote.buyerId === userId, shopRole: (row.memberRole as ShopRole | null) ?? null };
+  return { ...view, isBuyer: row.quote.buyerId === userId, shopRole };
 }
 
-/** Shop-side steps: the user must be a member of the quote's shop. */
-export async function getShopQuoteOrThrow({ id, userId }: { id: string; userId: string }) {
+/** Shop-side steps: the user must be a member of the quote's shop whose role grants `permission`. */
+export async function getShopQuoteOrThrow({ id, userId, permission }: { id: string; userId: string; permission: ShopPermission }) {
   const found = await getQuoteForViewerOrThrow({ id, userId });
   if (!found.shopRole) throw new AppError("forbidden:shop", "Only the shop's owner and staff can do this.");
+  if (!canInShop(found.shopRole, permission)) throw new AppError("forbidden:shop_role", "Your role at this shop does not allow this; ask its owner.");
   return found;
 }
 

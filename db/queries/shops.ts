@@ -39,13 +39,14 @@ export async function listShopsOfUser({ userId }: { userId: string }) {
     .innerJoin(organization, eq(organization.id, member.organizationId))
     .leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id))
     .where(eq(member.userId, userId)).orderBy(asc(organization.name));
-  return rows.map((r) => ({ ...r, role: asShopRole(r.role) }));
+  return rows.map((r) => ({ ...r, role: asShopRole(r.role), grants: r.role }));
 }
 
 export async function getMembership({ organizationId, userId }: { organizationId: string; userId: string }) {
   const [row] = await db.select({ id: member.id, role: member.role }).from(member)
     .where(and(eq(member.organizationId, organizationId), eq(member.userId, userId))).limit(1);
-  return row ? { id: row.id, role: asShopRole(row.role) } : null;
+  // `grants` is the stored role as is, for permission checks (canInShop): a stray value grants nothing.
+  return row ? { id: row.id, role: asShopRole(row.role), grants: row.role } : null;
 }
 
 export async function listMembers({ organizationId }: { organizationId: string }) {
