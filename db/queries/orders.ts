@@ -4,6 +4,7 @@ import { db } from "@/db/client";
 import { member, organization, parts, quoteLines, quotes, shopInventory, shopProfiles, user, type QuoteRow } from "@/db/schema";
 import { canInShop, type ShopPermission } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
+import { hasNul } from "@/lib/validation/nul";
 
 export type ShopRole = "owner" | "staff";
 
@@ -16,6 +17,7 @@ export async function listMemberShops({ userId }: { userId: string }) {
 
 /** A shop the user belongs to: 404 when there is no such shop, 403 when they are not its member. */
 export async function getMemberShopOrThrow({ slug, userId }: { slug: string; userId: string }) {
+  if (hasNul(slug)) throw new AppError("not_found:shop", "No shop with this name.");
   const [shop] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug }).from(organization).where(eq(organization.slug, slug));
   if (!shop) throw new AppError("not_found:shop", "No shop with this name.");
   const [m] = await db.select({ role: member.role }).from(member).where(and(eq(member.organizationId, shop.id), eq(member.userId, userId)));
@@ -24,6 +26,7 @@ export async function getMemberShopOrThrow({ slug, userId }: { slug: string; use
 }
 
 export async function getShopBySlug({ slug }: { slug: string }) {
+  if (hasNul(slug)) return null;
   const [shop] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug, currency: shopProfiles.currency })
     .from(organization).leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id)).where(eq(organization.slug, slug));
   return shop ?? null;
@@ -87,6 +90,7 @@ export async function getQuoteById({ id }: { id: string }) {
  * says nothing to a stranger, not even that it exists).
  */
 export async function getQuoteForViewerOrThrow({ id, userId }: { id: string; userId: string }) {
+  if (hasNul(id)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
   const [row] = await db.select({ quote: quotes, memberRole: member.role }).from(quotes)
     .leftJoin(member, and(eq(member.organizationId, quotes.organizationId), eq(member.userId, userId)))
     .where(eq(quotes.id, id)).limit(1);
