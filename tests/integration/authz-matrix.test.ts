@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { TEST_CARDS } from "@/lib/dev/stripe-fake";
 import { DEMO_CASES } from "@/seed/catalog/index";
 import { DEMO_SHOP } from "@/seed/accounts";
-import { Client, signedIn, uniqueEmail } from "../support/http";
+import { Client, signedIn, uniqueEmail, waitForMailQueue } from "../support/http";
 import { addShopMember, createShop, createUser, demoShopId, setBanned, testDb } from "../support/seed-users";
 import { ACTORS, type Actor, type Cell, expected, type Fixtures, MATRIX, PUBLIC_PAGES, saveBuild, submissionForm } from "./authz/matrix";
 
@@ -170,6 +170,7 @@ describe("authorization matrix", () => {
   afterAll(async () => {
     // Release whatever the matrix left reserved (an open payment holds stock for half an hour).
     for (const id of openCheckouts) await f?.clients.member.delete(`/api/v1/quotes/${id}/checkout`);
+    await waitForMailQueue();
     await pool.end();
   });
 

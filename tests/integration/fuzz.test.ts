@@ -3,7 +3,7 @@
 // changed by a refused write.
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, Client, signedIn } from "../support/http";
+import { BASE_URL, Client, signedIn, waitForMailQueue } from "../support/http";
 import { flagshipRequest, saveBuild } from "./builds-support";
 import { flagshipBuild, makeShop, makeUser, pool } from "./orders-support";
 
@@ -225,7 +225,7 @@ describe("fuzzed shop and order routes", () => {
     expect(q.status).toBe(201);
     quoteId = (await q.json()).id;
   }, 120_000);
-  afterAll(async () => { await pool.end(); });
+  afterAll(async () => { await pool.end(); await waitForMailQueue(); }, 90_000);
 
   /** Each JSON write: who sends it, a real body to mutate, and what must not change when it is refused. */
   const writes: { name: string; as: () => Client; method: string; path: () => string; base: () => Record<string, unknown>; state: () => Promise<string> }[] = [
