@@ -25,7 +25,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
     if (err instanceof AppError && err.status === 403) return <NotAMember message={err.message} />;
     throw err;
   }
-  const { shop, role, shops } = ctx;
+  const { shop, role, grants, shops } = ctx;
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[220px_minmax(0,1fr)]">
       <aside className="space-y-4">
@@ -46,7 +46,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
             </form>
           ) : null}
         </div>
-        <ShopNav entries={shopNavFor(role)} />
+        <ShopNav entries={shopNavFor(grants)} />
       </aside>
       <div className="min-w-0">{children}</div>
     </div>

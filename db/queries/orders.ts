@@ -2,7 +2,9 @@ import "server-only";
 import { and, asc, desc, eq, gt, inArray, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { member, organization, parts, quoteLines, quotes, shopInventory, shopProfiles, user, type QuoteRow } from "@/db/schema";
+import { canInShop, type ShopPermission } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
+import { hasNul } from "@/lib/validation/nul";
 
 export type ShopRole = "owner" | "staff";
 
@@ -15,14 +17,16 @@ export async function listMemberShops({ userId }: { userId: string }) {
 
 /** A shop the user belongs to: 404 when there is no such shop, 403 when they are not its member. */
 export async function getMemberShopOrThrow({ slug, userId }: { slug: string; userId: string }) {
+  if (hasNul(slug)) throw new AppError("not_found:shop", "No shop with this name.");
   const [shop] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug }).from(organization).where(eq(organization.slug, slug));
   if (!shop) throw new AppError("not_found:shop", "No shop with this name.");
   const [m] = await db.select({ role: member.role }).from(member).where(and(eq(member.organizationId, shop.id), eq(member.userId, userId)));
-  if (!m) throw new AppError("forbidden:shop", "Only the shop's owner and staff can see its orders.");
+  if (!m || !canInShop(m.role, { order: "read" })) throw new AppError("forbidden:shop", "Only the shop's owner and staff can see its orders.");
   return { ...shop, role: m.role as ShopRole };
 }
 
 export async function getShopBySlug({ slug }: { slug: string }) {
+  if (hasNul(slug)) return null;
   const [shop] = await db.select({ id: organization.id, name: organization.name, slug: organization.slug, currency: shopProfiles.currency })
     .from(organization).leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id)).where(eq(organization.slug, slug));
   return shop ?? null;
@@ -86,18 +90,22 @@ export async function getQuoteById({ id }: { id: string }) {
  * says nothing to a stranger, not even that it exists).
  */
 export async function getQuoteForViewerOrThrow({ id, userId }: { id: string; userId: string }) {
+  if (hasNul(id)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
   const [row] = await db.select({ quote: quotes, memberRole: member.role }).from(quotes)
     .leftJoin(member, and(eq(member.organizationId, quotes.organizationId), eq(member.userId, userId)))
     .where(eq(quotes.id, id)).limit(1);
-  if (!row || (row.quote.buyerId !== userId && !row.memberRole)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
+  // The shop's side sees it only through a role that may read orders; a stray role sees nothing.
+  const shopRole = row?.memberRole && canInShop(row.memberRole, { order: "read" }) ? row.memberRole : null;
+  if (!row || (row.quote.buyerId !== userId && !shopRole)) throw new AppError("not_found:quote", "No quote or order of yours with this number.");
   const view = await loadQuote(row.quote);
-  return { ...view, isBuyer: row.quote.buyerId === userId, shopRole: (row.memberRole as ShopRole | null) ?? null };
+  return { ...view, isBuyer: row.quote.buyerId === userId, shopRole };
 }
 
-/** Shop-side steps: the user must be a member of the quote's shop. */
-export async function getShopQuoteOrThrow({ id, userId }: { id: string; userId: string }) {
+/** Shop-side steps: the user must be a member of the quote's shop whose role grants `permission`. */
+export async function getShopQuoteOrThrow({ id, userId, permission }: { id: string; userId: string; permission: ShopPermission }) {
   const found = await getQuoteForViewerOrThrow({ id, userId });
   if (!found.shopRole) throw new AppError("forbidden:shop", "Only the shop's owner and staff can do this.");
+  if (!canInShop(found.shopRole, permission)) throw new AppError("forbidden:shop_role", "Your role at this shop does not allow this; ask its owner.");
   return found;
 }
 

@@ -1,4 +1,5 @@
 import "server-only";
+import { hasNul } from "@/lib/validation/nul";
 import { and, desc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { organization, shopApiKeys } from "@/db/schema";
@@ -16,6 +17,7 @@ export async function listApiKeys({ organizationId }: { organizationId: string }
 }
 
 export async function revokeApiKey({ organizationId, id }: { organizationId: string; id: string }) {
+  if (hasNul(id)) throw new AppError("not_found:api_key", "No such key for this shop (it may be revoked already).");
   const rows = await db.update(shopApiKeys).set({ revokedAt: new Date() })
     .where(and(eq(shopApiKeys.organizationId, organizationId), eq(shopApiKeys.id, id), isNull(shopApiKeys.revokedAt))).returning({ id: shopApiKeys.id });
   if (!rows.length) throw new AppError("not_found:api_key", "No such key for this shop (it may be revoked already).");

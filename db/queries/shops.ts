@@ -1,4 +1,5 @@
 import "server-only";
+import { hasNul } from "@/lib/validation/nul";
 import { and, asc, eq, gt, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { invitation, member, organization, shopInventory, shopProfiles, user } from "@/db/schema";
@@ -14,6 +15,8 @@ const shopColumns = {
 export type Shop = { id: string; name: string; slug: string; location: string | null; about: string | null; currency: string };
 
 export async function getShopBySlug({ slug }: { slug: string }): Promise<Shop | null> {
+  // PostgreSQL text cannot hold NUL: such a slug names no shop (instead of failing the query).
+  if (hasNul(slug)) return null;
   const [row] = await db.select(shopColumns).from(organization)
     .leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id)).where(eq(organization.slug, slug)).limit(1);
   return row ?? null;
@@ -39,13 +42,14 @@ export async function listShopsOfUser({ userId }: { userId: string }) {
     .innerJoin(organization, eq(organization.id, member.organizationId))
     .leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id))
     .where(eq(member.userId, userId)).orderBy(asc(organization.name));
-  return rows.map((r) => ({ ...r, role: asShopRole(r.role) }));
+  return rows.map((r) => ({ ...r, role: asShopRole(r.role), grants: r.role }));
 }
 
 export async function getMembership({ organizationId, userId }: { organizationId: string; userId: string }) {
   const [row] = await db.select({ id: member.id, role: member.role }).from(member)
     .where(and(eq(member.organizationId, organizationId), eq(member.userId, userId))).limit(1);
-  return row ? { id: row.id, role: asShopRole(row.role) } : null;
+  // `grants` is the stored role as is, for permission checks (canInShop): a stray value grants nothing.
+  return row ? { id: row.id, role: asShopRole(row.role), grants: row.role } : null;
 }
 
 export async function listMembers({ organizationId }: { organizationId: string }) {
@@ -56,6 +60,7 @@ export async function listMembers({ organizationId }: { organizationId: string }
 }
 
 export async function getMemberOrThrow({ organizationId, memberId }: { organizationId: string; memberId: string }) {
+  if (hasNul(memberId)) throw new AppError("not_found:member", "No such member of this shop.");
   const [row] = await db.select({ id: member.id, userId: member.userId, role: member.role, email: user.email }).from(member)
     .innerJoin(user, eq(user.id, member.userId))
     .where(and(eq(member.organizationId, organizationId), eq(member.id, memberId))).limit(1);
@@ -71,6 +76,7 @@ export async function listPendingInvitations({ organizationId }: { organizationI
 }
 
 export async function getInvitation({ id }: { id: string }) {
+  if (hasNul(id)) return null;
   const [row] = await db.select({ id: invitation.id, email: invitation.email, status: invitation.status, expiresAt: invitation.expiresAt, shopName: organization.name, shopSlug: organization.slug })
     .from(invitation).innerJoin(organization, eq(organization.id, invitation.organizationId)).where(eq(invitation.id, id)).limit(1);
   return row ?? null;

@@ -41,17 +41,24 @@ export function can(role: string | null | undefined, permission: SitePermission)
 
 // Shop roles (better-auth organizations): owner and staff. Teams and dynamic access control are
 // not enabled, so their statements are left out.
+// `organization`, `member` and `invitation` are better-auth's own (it checks them on its
+// /organization endpoints); the rest are the app's: `members` (see the staff list, invite and
+// remove staff), `apiKey` (stock-sync keys), `inventory`, `quote` (answer or decline a request),
+// `order` (see the shop's orders, ship, refund).
 export const shopStatements = {
   organization: ["update", "delete"],
   member: ["create", "update", "delete"],
   invitation: ["create", "cancel"],
+  members: ["read", "manage"],
+  apiKey: ["manage"],
   inventory: ["read", "update"],
   quote: ["answer"],
+  order: ["read", "ship", "refund"],
 } as const;
 export const shopAc = createAccessControl(shopStatements);
 export const shopRoles = {
   owner: shopAc.newRole({ ...shopStatements }),
-  staff: shopAc.newRole({ inventory: ["read", "update"], quote: ["answer"] }),
+  staff: shopAc.newRole({ members: ["read"], inventory: ["read", "update"], quote: ["answer"], order: ["read", "ship", "refund"] }),
 };
 export type ShopRole = keyof typeof shopRoles;
 export type ShopPermission = OneOf<typeof shopStatements>;

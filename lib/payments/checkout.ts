@@ -84,7 +84,7 @@ export async function reconcileCheckout(quote: { status: string; checkoutSession
 
 /** The shop refunds the whole order through the provider; the order says refunded only once the provider agrees. */
 export async function refundOrder({ quoteId, userId }: { quoteId: string; userId: string }) {
-  const found = await getShopQuoteOrThrow({ id: quoteId, userId });
+  const found = await getShopQuoteOrThrow({ id: quoteId, userId, permission: { order: "refund" } });
   const { quote } = await claimRefund({ id: quoteId });
   let refundId: string | null = null;
   try {

@@ -17,7 +17,7 @@ export async function requireDashboardShop(next = "/shop") {
   if (!shops.length) throw new AppError("forbidden:shop", "The shop dashboard is for shop owners and staff.");
   const chosen = (await cookies()).get(SHOP_COOKIE)?.value;
   const shop = shops.find((s) => s.slug === chosen) ?? shops[0];
-  return { user, shop, role: shop.role, shops };
+  return { user, shop, role: shop.role, grants: shop.grants, shops };
 }
 
 /** For pages under the dashboard layout: null when the layout already shows "not a member". */

@@ -3,8 +3,10 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { TEST_CARDS } from "@/lib/dev/stripe-fake";
 import { DEMO_CASES } from "@/seed/catalog/index";
-import { Client, signedIn, uniqueEmail } from "../support/http";
+import { DEMO_SHOP } from "@/seed/accounts";
+import { Client, signedIn, uniqueEmail, waitForMailQueue } from "../support/http";
 import { addShopMember, createShop, createUser, demoShopId, setBanned, testDb } from "../support/seed-users";
 import { ACTORS, type Actor, type Cell, expected, type Fixtures, MATRIX, PUBLIC_PAGES, saveBuild, submissionForm } from "./authz/matrix";
 
@@ -61,6 +63,7 @@ describe("every route has a row", () => {
 
 describe("authorization matrix", () => {
   let f: Fixtures;
+  const openCheckouts: string[] = [];
   const { db, pool } = testDb();
 
   beforeAll(async () => {
@@ -79,6 +82,10 @@ describe("authorization matrix", () => {
     await addShopMember(db, shopId, ids.shopStaff, "staff");
     const otherShopId = await createShop(db, `Dunmore Glassworks ${tag}`);
     await addShopMember(db, otherShopId, ids.otherShopStaff, "staff");
+    const sql = async <T = Record<string, unknown>>(text: string, values: unknown[] = []) => (await pool.query(text, values)).rows as T[];
+    // A shop as the app makes them has a profile (its currency); the demo shop has one from the seed.
+    await sql("insert into shop_profiles (organization_id, currency) values ($1, 'USD') on conflict do nothing", [otherShopId]);
+    const inviteShopId = await createShop(db, `Matrix Invitations ${tag}`);
 
     const clients = { anon: new Client() } as Record<Actor, Client>;
     for (const a of ACTORS) if (a !== "anon") clients[a] = await signedIn(emails[a]);
@@ -102,8 +109,57 @@ describe("authorization matrix", () => {
     // A camera no saved build uses: correcting it re-checks nothing, so the matrix stays quick.
     const parts = ((await (await clients.anon.get("/api/v1/parts?kind=camera&limit=50")).json()) as { items: { slug: string }[] }).items
       .filter((p) => !(Object.values(DEMO_CASES) as { camera?: string }[]).some((c) => c.camera === p.slug));
+    const userIds = { ...ids } as Fixtures["userIds"];
+    for (const a of ["member", "moderator", "admin", "shopOwner"] as const) {
+      userIds[a] = (await sql<{ id: string }>(`select id from "user" where email = $1`, [emails[a]]))[0].id;
+    }
+    const quoteBuild = await newBuild("unlisted");
+    const quoteStatus = async (id: string) => (await sql<{ status: string }>("select status from quotes where id = $1", [id]))[0].status;
+    const quoteLines = async (id: string) => ((await (await clients.shopOwner.get(`/api/v1/quotes/${id}`)).json()) as { lines: { id: string; quantity: number; unitPriceCents: number }[] }).lines;
+    const newQuote = async (state: "requested" | "quoted" | "awaiting" | "paid") => {
+      const res = await member.post("/api/v1/quotes", { build: quoteBuild, shop: DEMO_SHOP.slug, note: "Matrix fixture" });
+      if (res.status !== 201) throw new Error(`quote request failed: ${res.status} ${await res.text()}`);
+      const { id } = (await res.json()) as { id: string };
+      if (state === "requested") return id;
+      // One unit of the first line only, so the demo shop's shelves barely move (and are put back below).
+      const lines = (await quoteLines(id)).map((l, i) => ({ id: l.id, quantity: i === 0 ? 1 : 0, unitPriceCents: l.unitPriceCents }));
+      const answered = await clients.shopOwner.post(`/api/v1/quotes/${id}/answer`, { lines, shippingCents: 0, validDays: 7 });
+      if (answered.status !== 200) throw new Error(`answer failed: ${answered.status} ${await answered.text()}`);
+      if (state === "quoted") return id;
+      const checkout = await member.post(`/api/v1/quotes/${id}/checkout`);
+      if (checkout.status !== 201) throw new Error(`checkout failed: ${checkout.status} ${await checkout.text()}`);
+      const { url } = (await checkout.json()) as { url: string };
+      openCheckouts.push(id);
+      if (state === "awaiting") return id;
+      const paid = await fetch(url, { method: "POST", body: new URLSearchParams({ card: TEST_CARDS.succeeds }), redirect: "manual" });
+      if (paid.status !== 303) throw new Error(`payment failed: ${paid.status}`);
+      for (let i = 0; i < 50 && (await quoteStatus(id)) !== "paid"; i++) {
+        await member.get(`/api/v1/quotes/${id}`);
+        await new Promise((r) => setTimeout(r, 100));
+      }
+      expect(await quoteStatus(id)).toBe("paid");
+      // Put the sold unit back on the demo shop's shelf: later tests count on its stock.
+      await sql("update shop_inventory i set on_hand = i.on_hand + l.quantity from quote_lines l where l.quote_id = $1 and l.quantity > 0 and i.id = l.inventory_id", [id]);
+      return id;
+    };
+    const quoteId = await newQuote("requested");
+    const quoteRef = (await sql<{ ref: string }>("select ref from quotes where id = $1", [quoteId]))[0].ref;
+    const awaitingQuoteId = await newQuote("awaiting");
+    const awaitingSessionId = (await sql<{ checkout_session_id: string }>("select checkout_session_id from quotes where id = $1", [awaitingQuoteId]))[0].checkout_session_id;
+    const stockedSlug = ((await (await clients.shopOwner.get(`/api/v1/shops/${DEMO_SHOP.slug}/inventory`)).json()) as { items: { slug: string }[] }).items[0].slug;
+    const newShopStaffMember = async () => {
+      const userId = await createUser(db, { email: uniqueEmail("matrix-leaver"), name: "Corin Vale" });
+      await addShopMember(db, shopId, userId, "staff");
+      return (await sql<{ id: string }>("select id from member where organization_id = $1 and user_id = $2", [shopId, userId]))[0].id;
+    };
+    const newInvitation = async (email: string) => {
+      const id = crypto.randomUUID();
+      await sql("insert into invitation (id, organization_id, email, role, status, expires_at, inviter_id) values ($1, $2, $3, 'staff', 'pending', now() + interval '2 days', $4)", [id, inviteShopId, email, userIds.shopOwner]);
+      return { id, shopId: inviteShopId };
+    };
     f = {
-      clients, emails, privateSlug, privateTitle, hiddenSlug, shopId, otherShopId,
+      clients, emails, privateSlug, privateTitle, hiddenSlug, shopId, otherShopId, shopSlug: DEMO_SHOP.slug, stockedSlug,
+      quoteId, quoteRef, awaitingQuoteId, awaitingSessionId, userIds, sql, newQuote, quoteLines, quoteStatus, newShopStaffMember, newInvitation,
       publicSlug: await newBuild("public"), unlistedSlug: await newBuild("unlisted"),
       submissionId: submission.id, submissionSlug: submission.slug, submissionModel: submission.model,
       catalogSlug: parts[parts.length - 1].slug,
@@ -111,7 +167,12 @@ describe("authorization matrix", () => {
     };
   });
 
-  afterAll(async () => { await pool.end(); });
+  afterAll(async () => {
+    // Release whatever the matrix left reserved (an open payment holds stock for half an hour).
+    for (const id of openCheckouts) await f?.clients.member.delete(`/api/v1/quotes/${id}/checkout`);
+    await waitForMailQueue();
+    await pool.end();
+  });
 
   for (const r of MATRIX) {
     for (const actor of ACTORS) {
@@ -121,9 +182,9 @@ describe("authorization matrix", () => {
         const cell: Cell = { f, actor, as };
         const target = await r.path(f, cell);
         const url = target.startsWith("/") ? target : `${r.route.replace(/\[slug\]/, target)}`;
-        const raw = typeof r.body === "function" ? (r.body as (c: Cell) => unknown)(cell) : r.body;
+        const raw = typeof r.body === "function" ? await (r.body as (c: Cell & { target: string }) => unknown)({ ...cell, target }) : r.body;
         const method = r.method === "PAGE" ? "GET" : r.method;
-        const res = raw instanceof FormData
+        const res = raw instanceof FormData || raw instanceof Blob
           ? await as.request(url, { method, body: raw })
           : await as.request(url, { method, ...(raw === undefined ? {} : { json: raw }) });
         expect(want, `${method} ${url} as ${actor} answered ${res.status}`).toContain(res.status);

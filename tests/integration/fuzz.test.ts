@@ -2,9 +2,10 @@
 // error shape { error: { code, message, fields? } } with no stack trace or SQL, and nothing
 // changed by a refused write.
 import fc from "fast-check";
-import { beforeAll, describe, expect, it } from "vitest";
-import { BASE_URL, Client, signedIn } from "../support/http";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { BASE_URL, Client, signedIn, waitForMailQueue } from "../support/http";
 import { flagshipRequest, saveBuild } from "./builds-support";
+import { flagshipBuild, makeShop, makeUser, pool } from "./orders-support";
 
 const RUNS = Number(process.env.TRAINYARD_FUZZ_RUNS ?? 40);
 const LEAK = /\bat\s+\S+\s+\(|node_modules|\.ts:\d+|\bselect\b.*\bfrom\b|\binsert into\b|\bupdate\b.*\bset\b|postgres|drizzle|syntax error|violates|SQLSTATE|TypeError|ReferenceError/i;
@@ -202,6 +203,83 @@ describe("fuzzed bodies", () => {
       await checkAnswer(res, "POST /api/v1/submissions");
       const after = (await (await member.get("/api/v1/submissions")).json()).items.length;
       if (res.status >= 400) expect(after).toBe(before);
+    }) as never), 240_000);
+});
+
+// Shop and order routes, on a fresh shop of the fuzz's own (the demo shop's stock stays as it is).
+describe("fuzzed shop and order routes", () => {
+  let owner: Client, shopSlug: string, quoteId: string, buildSlug: string;
+  const json = async (c: Client, path: string) => (await send(c, path)).json();
+  const inventory = async () => JSON.stringify((await json(owner, `/api/v1/shops/${shopSlug}/inventory`)).items);
+  const quoteState = async () => { const q = await json(member, `/api/v1/quotes/${quoteId}`); return `${q.status} ${q.totalCents} ${q.tracking ?? ""}`; };
+
+  beforeAll(async () => {
+    const person = await makeUser("fuzz-owner");
+    owner = person.client;
+    shopSlug = (await makeShop("Fuzz Optics", person.id)).slug;
+    const build = await flagshipBuild(member);
+    buildSlug = build.slug;
+    const put = await send(owner, `/api/v1/shops/${shopSlug}/inventory`, { method: "PUT", json: { items: build.connectors.map((part, i) => ({ part, sku: `FZ-${i}`, priceCents: 1500, currency: "USD", onHand: 5 })) } });
+    expect(put.status).toBe(200);
+    const q = await send(member, "/api/v1/quotes", { method: "POST", json: { build: buildSlug, shop: shopSlug } });
+    expect(q.status).toBe(201);
+    quoteId = (await q.json()).id;
+  }, 120_000);
+  afterAll(async () => { await pool.end(); await waitForMailQueue(); }, 90_000);
+
+  /** Each JSON write: who sends it, a real body to mutate, and what must not change when it is refused. */
+  const writes: { name: string; as: () => Client; method: string; path: () => string; base: () => Record<string, unknown>; state: () => Promise<string> }[] = [
+    { name: "PUT /api/v1/shops/:slug/inventory", as: () => owner, method: "PUT", path: () => `/api/v1/shops/${shopSlug}/inventory`,
+      base: () => ({ items: [{ part: "tarrant-machining-m48-spacer-2-mm", sku: "FZ-NEW", priceCents: 100, currency: "USD", onHand: 1 }], remove: [] }), state: inventory },
+    { name: "POST /api/v1/shops/:slug/members", as: () => owner, method: "POST", path: () => `/api/v1/shops/${shopSlug}/members`,
+      base: () => ({ email: "fuzz-invitee@example.org" }), state: async () => JSON.stringify((await json(owner, `/api/v1/shops/${shopSlug}/members`)).invitations.length) },
+    { name: "POST /api/v1/shops/:slug/api-keys", as: () => owner, method: "POST", path: () => `/api/v1/shops/${shopSlug}/api-keys`,
+      base: () => ({ name: "Fuzz till" }), state: async () => JSON.stringify((await json(owner, `/api/v1/shops/${shopSlug}/api-keys`)).keys.length) },
+    { name: "POST /api/v1/quotes", as: () => member, method: "POST", path: () => "/api/v1/quotes",
+      base: () => ({ build: buildSlug, shop: shopSlug, note: "n" }), state: async () => JSON.stringify((await json(member, "/api/v1/quotes")).items.length) },
+    { name: "POST /api/v1/quotes/:id/answer", as: () => owner, method: "POST", path: () => `/api/v1/quotes/${quoteId}/answer`,
+      base: () => ({ lines: [{ id: "x", quantity: 1, unitPriceCents: 100 }], shippingCents: 0, validDays: 7, note: "n" }), state: quoteState },
+    { name: "POST /api/v1/orders/:id/ship (not paid)", as: () => owner, method: "POST", path: () => `/api/v1/orders/${quoteId}/ship`, base: () => ({ tracking: "t" }), state: quoteState },
+    { name: "POST /api/v1/orders/:id/refund (not paid)", as: () => owner, method: "POST", path: () => `/api/v1/orders/${quoteId}/refund`, base: () => ({ reason: "r" }), state: quoteState },
+    { name: "POST /api/v1/shops/where-to-buy", as: () => anon, method: "POST", path: () => "/api/v1/shops/where-to-buy",
+      base: () => ({ parts: [{ slug: "tarrant-machining-m48-spacer-2-mm", quantity: 1 }] }), state: async () => "" },
+  ];
+  for (const w of writes) {
+    it(`${w.name}: refused bodies change nothing`, () => prop(fc.asyncProperty(fc.oneof(mutated(w.base()).map((j) => ({ json: j })), rawBodies.map((raw) => ({ raw }))), async (body) => {
+      const before = await w.state();
+      const res = await send(w.as(), w.path(), { method: w.method, ...body });
+      await checkAnswer(res, `${w.method} ${w.path()}`);
+      if (res.status >= 400) expect(await w.state()).toBe(before);
+    }) as never), 240_000);
+  }
+
+  it("POST /api/v1/shops/:slug/inventory/import?confirm=1: hostile files change nothing", () => prop(fc.asyncProperty(fc.oneof(hostileString,
+    fc.array(fc.array(hostileString, { maxLength: 8 }), { maxLength: 20 }).map((rows) => ["catalog_slug,maker,model,sku,price_cents,currency,on_hand", ...rows.map((r) => r.join(","))].join("\n"))), async (csv) => {
+    const before = await inventory();
+    const res = await send(owner, `/api/v1/shops/${shopSlug}/inventory/import?confirm=1`, { method: "POST", headers: { "content-type": "text/csv" }, body: csv });
+    await checkAnswer(res, "POST /api/v1/shops/:slug/inventory/import");
+    if (res.status >= 400) expect(await inventory()).toBe(before);
+  }) as never), 240_000);
+
+  it("POST /api/v1/webhooks/stripe: hostile events with forged signatures answer 400 and settle nothing", () => prop(fc.asyncProperty(
+    fc.oneof(hostileValue.map((v) => JSON.stringify(v) ?? "null"), rawBodies), fc.oneof(hostileString, fc.constant(`t=${Math.floor(Date.now() / 1000)},v1=${"0".repeat(64)}`)), async (raw, signature) => {
+      const before = await quoteState();
+      const res = await send(anon, "/api/v1/webhooks/stripe", { method: "POST", raw, headers: /^[\x20-\x7e]*$/.test(signature) ? { "stripe-signature": signature } : {} });
+      await checkAnswer(res, "POST /api/v1/webhooks/stripe");
+      // 431: Node refuses a header that large before the app sees it.
+      expect([400, 413, 431]).toContain(res.status);
+      expect(await quoteState()).toBe(before);
+    }) as never), 240_000);
+
+  it("GET /api/v1/orders?shop=… and shop/quote ids in paths", () => prop(fc.asyncProperty(query(["shop"]), pathSegment,
+    fc.constantFrom("/api/v1/quotes/", "/api/v1/shops/", "/quotes/", "/shops/", "/shop/orders/", "/shops/join/"), async (q, seg, prefix) => {
+      await checkAnswer(await send(member, `/api/v1/orders?${q}`), `GET /api/v1/orders?${q.slice(0, 200)}`);
+      const path = `${prefix}${seg}${prefix === "/api/v1/shops/" ? "/inventory" : ""}`;
+      await checkAnswer(await send(owner, path), `GET ${path.slice(0, 200)}`);
+      for (const sub of ["members", "api-keys"]) {
+        const del = `/api/v1/shops/${shopSlug}/${sub}/${seg}`;
+        await checkAnswer(await send(owner, del, { method: "DELETE" }), `DELETE ${del.slice(0, 200)}`);
+      }
     }) as never), 240_000);
 });
 

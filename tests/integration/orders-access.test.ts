@@ -96,7 +96,12 @@ describe("quote and order routes", () => {
     expect(await page(actors.visitor, `/quotes/${q.id}`)).toBe(307);
     expect(await page(actors.staff, `/shop/orders/${q.id}`)).toBe(200);
     expect(await page(actors.otherShop, `/shop/orders/${q.id}`)).toBe(404);
-    expect(await page(actors.buyer, `/shop/orders/${q.id}`)).toBe(404);
+    // A buyer in no shop meets the dashboard's "for shops" page (app/shop/layout.tsx), not the order.
+    const asBuyer = await actors.buyer.get(`/shop/orders/${q.id}`);
+    const html = await asBuyer.text();
+    expect(asBuyer.status).toBe(200);
+    expect(html).toContain("This part of Trainyard is for shops");
+    expect(html).not.toContain(q.ref);
     expect(await page(actors.visitor, "/account/orders")).toBe(307);
   });
 

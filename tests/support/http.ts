@@ -72,6 +72,21 @@ export async function waitForMail(email: string, subjectPart: string, timeoutMs 
   throw new Error(`no "${subjectPart}" mail for ${email}`);
 }
 
+/**
+ * Wait until the mail queue is empty (up to `timeoutMs`): a test file that sends many mails
+ * calls it last, so the next file's mail is not stuck behind its backlog.
+ */
+export async function waitForMailQueue(timeoutMs = 60_000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    outboxReader ??= new Client().signIn("admin@trainyard.test");
+    const res = await (await outboxReader).get(`/api/dev/outbox`);
+    if (!res.ok) throw new Error(`outbox answered ${res.status}`);
+    if (!((await res.json()) as { pending: unknown[] }).pending.length) return;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+}
+
 export function firstLink(text: string): string {
   const m = text.match(/https?:\/\/\S+/);
   if (!m) throw new Error("no link in message");

@@ -27,4 +27,16 @@ describe("one role vocabulary", () => {
     expect(canInShop(null, { inventory: "read" })).toBe(false);
     expect(canInShop("toString", { inventory: "read" })).toBe(false);
   });
+
+  it("keeps people, keys and money decisions with the owner; staff run stock, quotes and orders", () => {
+    const table: [string | null, Parameters<typeof canInShop>[1], boolean][] = [
+      ["owner", { members: "manage" }, true], ["staff", { members: "manage" }, false], ["staff", { members: "read" }, true], [null, { members: "read" }, false],
+      ["owner", { apiKey: "manage" }, true], ["staff", { apiKey: "manage" }, false], ["member", { apiKey: "manage" }, false],
+      ["staff", { inventory: "read" }, true], ["owner", { inventory: "update" }, true],
+      ["owner", { quote: "answer" }, true], ["staff", { quote: "answer" }, true], [null, { quote: "answer" }, false],
+      ["owner", { order: "read" }, true], ["staff", { order: "read" }, true], ["staff", { order: "ship" }, true], ["staff", { order: "refund" }, true],
+      ["admin", { order: "refund" }, false], ["", { order: "read" }, false], ["staff , owner", { apiKey: "manage" }, true],
+    ];
+    for (const [role, permission, ok] of table) expect(canInShop(role, permission), `${role} ${JSON.stringify(permission)}`).toBe(ok);
+  });
 });

@@ -8,7 +8,7 @@ import { shipOrderSchema } from "@/lib/validation/orders";
 export const dynamic = "force-dynamic";
 
 export const POST = withSession<{ id: string }>(async (request, { user, params }) => {
-  const found = await getShopQuoteOrThrow({ id: params.id, userId: user.id });
+  const found = await getShopQuoteOrThrow({ id: params.id, userId: user.id, permission: { order: "ship" } });
   const { tracking } = await parseJsonBody(request, shipOrderSchema, 10_000);
   const quote = await markShipped({ id: found.quote.id, tracking });
   await orderMail.shipped(quote, found.buyer.email, found.shop.name);

@@ -9,9 +9,9 @@ import { answerQuoteSchema } from "@/lib/validation/orders";
 export const dynamic = "force-dynamic";
 
 export const POST = withSession<{ id: string }>(async (request, { user, params }) => {
-  const found = await getShopQuoteOrThrow({ id: params.id, userId: user.id });
+  const found = await getShopQuoteOrThrow({ id: params.id, userId: user.id, permission: { quote: "answer" } });
   const input = await parseJsonBody(request, answerQuoteSchema, 100_000);
   const quote = await answerQuote({ id: found.quote.id, input });
   await orderMail.quoted(quote, found.buyer.email, found.shop.name);
-  return Response.json(quoteToJson(await getShopQuoteOrThrow({ id: quote.id, userId: user.id })));
+  return Response.json(quoteToJson(await getShopQuoteOrThrow({ id: quote.id, userId: user.id, permission: { quote: "answer" } })));
 });

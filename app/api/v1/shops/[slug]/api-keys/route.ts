@@ -9,12 +9,12 @@ export const dynamic = "force-dynamic";
 type P = { slug: string };
 
 export const GET = withSession<P>(async (_request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user, role: "owner" });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { apiKey: "manage" } });
   return Response.json({ keys: await listApiKeys({ organizationId: shop.id }) });
 });
 
 export const POST = withSession<P>(async (request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user, role: "owner" });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { apiKey: "manage" } });
   const { name } = await parseJsonBody(request, createApiKeySchema, 10_000);
   const { key, start, hash } = newApiKey();
   const row = await insertApiKey({ organizationId: shop.id, name, start, keyHash: hash, createdBy: user.id });

@@ -9,13 +9,13 @@ export const dynamic = "force-dynamic";
 type P = { slug: string };
 
 export const GET = withSession<P>(async (_request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { members: "read" } });
   const [members, invitations] = await Promise.all([listMembers({ organizationId: shop.id }), listPendingInvitations({ organizationId: shop.id })]);
   return Response.json({ members, invitations });
 });
 
 export const POST = withSession<P>(async (request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user, role: "owner" });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { members: "manage" } });
   const { email } = await parseJsonBody(request, inviteStaffSchema, 10_000);
   const invitation = await inviteStaff({ shop, email, inviterName: user.name, headers: request.headers });
   return Response.json({ invitation }, { status: 201 });

@@ -6,6 +6,6 @@ import { stockNextForShop } from "@/lib/shops/stock-next-query";
 export const dynamic = "force-dynamic";
 
 export const GET = withSession<{ slug: string }>(async (_request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { inventory: "read" } });
   return Response.json(await stockNextForShop({ organizationId: shop.id }));
 });

@@ -6,7 +6,7 @@ import { requireShopMember } from "@/lib/shops/access";
 export const dynamic = "force-dynamic";
 
 export const DELETE = withSession<{ slug: string; id: string }>(async (_request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user, role: "owner" });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { apiKey: "manage" } });
   await revokeApiKey({ organizationId: shop.id, id: params.id });
   return Response.json({ revoked: params.id });
 });

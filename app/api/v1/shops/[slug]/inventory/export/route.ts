@@ -7,7 +7,7 @@ import { exportInventoryCsv } from "@/lib/shops/csv";
 export const dynamic = "force-dynamic";
 
 export const GET = withSession<{ slug: string }>(async (request, { user, params }) => {
-  const { shop } = await requireShopActor({ slug: params.slug, request, user });
+  const { shop } = await requireShopActor({ slug: params.slug, request, user, permission: { inventory: "read" } });
   const csv = exportInventoryCsv(await listInventory({ organizationId: shop.id }));
   const day = new Date().toISOString().slice(0, 10);
   return new Response(`\uFEFF${csv}\r\n`, {

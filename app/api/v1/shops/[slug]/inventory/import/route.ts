@@ -7,7 +7,7 @@ import { readCsvUpload } from "@/lib/shops/read-upload";
 export const dynamic = "force-dynamic";
 
 export const POST = withSession<{ slug: string }>(async (request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { inventory: "update" } });
   const text = await readCsvUpload(request);
   const confirm = new URL(request.url).searchParams.get("confirm") === "1";
   const result = await importInventoryCsv({ organizationId: shop.id, text, confirm });

@@ -6,6 +6,6 @@ import { removeStaff } from "@/lib/shops/members";
 export const dynamic = "force-dynamic";
 
 export const DELETE = withSession<{ slug: string; memberId: string }>(async (request, { user, params }) => {
-  const { shop } = await requireShopMember({ slug: params.slug, user, role: "owner" });
+  const { shop } = await requireShopMember({ slug: params.slug, user, permission: { members: "manage" } });
   return Response.json(await removeStaff({ shop, memberId: params.memberId, headers: request.headers }));
 });
