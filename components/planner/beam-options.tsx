@@ -5,6 +5,8 @@ import { ShopSourceChoice } from "@/components/shops/shop-source-choice";
 import { useId } from "react";
 import { filterShiftMm } from "@/lib/optics";
 import type { Glass, PlanState } from "@/lib/planner/url-state";
+import { formatLength } from "@/lib/units";
+import { LengthUnitProvider, useLengthUnit } from "./length-unit";
 import { NumberField } from "./number-field";
 
 type Update = (patch: Partial<PlanState>) => void;
@@ -31,6 +33,7 @@ function Chip({ pressed, onClick, children, label }: { pressed: boolean; onClick
 }
 
 function GlassEditor({ title, glass, onChange, allowNone }: { title: string; glass: Glass | null; onChange: (g: Glass | null) => void; allowNone: string }) {
+  const unit = useLengthUnit();
   const n = glass?.refractiveIndex ?? MATERIALS[0].n;
   const custom = glass !== null && !THICKNESSES.includes(glass.thicknessMm as 1 | 2 | 3);
   const otherN = glass !== null && !MATERIALS.some((m) => m.n === glass.refractiveIndex);
@@ -65,7 +68,7 @@ function GlassEditor({ title, glass, onChange, allowNone }: { title: string; gla
               onChange={(v) => v !== null && onChange({ ...glass, refractiveIndex: v })} />
           ) : null}
           <p className={`num col-span-2 self-end text-xs text-muted ${otherN ? "sm:col-span-1" : ""}`}>
-            {glass.thicknessMm} mm of {materialName(glass.refractiveIndex)} pushes focus back <strong className="text-text">{filterShiftMm(glass.thicknessMm, glass.refractiveIndex).toFixed(2)} mm</strong>.
+            {glass.thicknessMm} mm of {materialName(glass.refractiveIndex)} pushes focus back <strong className="text-text">{unit === "mm" ? `${filterShiftMm(glass.thicknessMm, glass.refractiveIndex).toFixed(2)} mm` : formatLength(filterShiftMm(glass.thicknessMm, glass.refractiveIndex), unit)}</strong>.
           </p>
         </div>
       ) : null}
@@ -78,6 +81,7 @@ export function BeamOptions({ state, update, signedIn, signInHref, opticsToleran
 }) {
   const id = useId();
   return (
+    <LengthUnitProvider unit={state.unit}>
     <div className="space-y-5 rounded-lg border border-line bg-surface p-4">
       <GlassEditor title="Filter in the beam" allowNone="None" glass={state.filter} onChange={(filter) => update({ filter })} />
       {state.extraGlass ? (
@@ -92,7 +96,10 @@ export function BeamOptions({ state, update, signedIn, signInHref, opticsToleran
         <NumberField label="Tolerance override (±)" unit="mm" min={0.01} max={10} value={state.toleranceMm}
           placeholder={opticsTolerance !== null ? `${opticsTolerance} — the maker's` : "the maker's figure"}
           onChange={(toleranceMm) => update({ toleranceMm })} />
-        <p className="mt-1 text-xs text-muted">Leave empty to use the corrector maker&apos;s tolerance. Fast optics want less.</p>
+        <p className="mt-1 text-xs text-muted">
+          {state.unit === "in" && state.toleranceMm !== null ? <span className="num">± {formatLength(state.toleranceMm, "in")}. </span> : null}
+          Leave empty to use the corrector maker&apos;s tolerance. Fast optics want less.
+        </p>
       </div>
       <fieldset>
         <legend className="mb-1.5 text-sm font-semibold text-ink">Draw the parts from</legend>
@@ -116,5 +123,6 @@ export function BeamOptions({ state, update, signedIn, signInHref, opticsToleran
         </div>
       </fieldset>
     </div>
+    </LengthUnitProvider>
   );
 }

@@ -2,32 +2,35 @@
 // One chosen part in the left column: its name, faces and the numbers that matter here.
 import type { ReactNode } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
-import { formatMm } from "@/lib/units";
+import { formatLength, type LengthUnit } from "@/lib/units";
 import { getInterface, interfaceHue, interfaceLabel } from "@/lib/interfaces";
 import { ApiError, usePart } from "./api";
+import { useLengthUnit } from "./length-unit";
 import { roleOf } from "./part-combobox";
 
 type Extra = { focalLengthMm?: number; backFocusMm?: number; backFocusToleranceMm?: number; focalRatio?: number;
   sensorWidthMm?: number; sensorHeightMm?: number; pixelSizeUm?: number; opticsRole?: string };
 
-function facts(p: ApiPart & Extra): string[] {
+function facts(p: ApiPart & Extra, unit: LengthUnit): string[] {
+  const len = (mm: number) => formatLength(mm, unit);
   const out: string[] = [];
   if (p.kind === "optics") {
     if (p.focalLengthMm) out.push(`${p.focalLengthMm} mm${p.focalRatio ? ` f/${p.focalRatio}` : ""}`);
-    if (p.backFocusMm !== undefined) out.push(`back focus ${p.backFocusMm} ± ${p.backFocusToleranceMm ?? 0.5} mm`);
+    if (p.backFocusMm !== undefined) out.push(unit === "mm" ? `back focus ${p.backFocusMm} ± ${p.backFocusToleranceMm ?? 0.5} mm` : `back focus ${len(p.backFocusMm)} ± ${len(p.backFocusToleranceMm ?? 0.5)}`);
     else if (p.opticsRole === "telescope") out.push("no back focus of its own");
   } else if (p.kind === "camera") {
-    out.push(`${formatMm(p.lengthMm)} to the sensor`);
+    out.push(`${len(p.lengthMm)} to the sensor`);
     if (p.sensorWidthMm && p.sensorHeightMm) out.push(`${p.sensorWidthMm} × ${p.sensorHeightMm} mm sensor`);
     if (p.pixelSizeUm) out.push(`${p.pixelSizeUm} µm pixels`);
   } else {
-    out.push(`${formatMm(p.lengthMm)}${p.adjustMm ? ` to ${formatMm(p.lengthMm + p.adjustMm)}` : ""}`);
+    out.push(`${len(p.lengthMm)}${p.adjustMm ? ` to ${len(p.lengthMm + p.adjustMm)}` : ""}`);
   }
   return out;
 }
 
 export function ChosenPart({ slug, actions, tone = "plain" }: { slug: string; actions: ReactNode; tone?: "glass" | "station" | "plain" }) {
   const part = usePart(slug);
+  const unit = useLengthUnit();
   const ring = tone === "glass" ? "border-glass/50 bg-glass/5" : tone === "station" ? "border-line bg-station" : "border-line bg-surface";
   if (part.isError) {
     const missing = part.error instanceof ApiError && part.error.status === 404;
@@ -50,7 +53,7 @@ export function ChosenPart({ slug, actions, tone = "plain" }: { slug: string; ac
             </div>
             <div className="flex shrink-0 gap-1">{actions}</div>
           </div>
-          <p className="num mt-1 text-xs text-muted">{facts(p).join(" · ")}</p>
+          <p className="num mt-1 text-xs text-muted">{facts(p, unit).join(" · ")}</p>
           <p className="mt-1.5 flex flex-wrap items-center gap-x-2 gap-y-1 text-xs">
             {p.front ? <FaceChip face={p.front} /> : <span className="text-muted">sky</span>}
             <span aria-hidden className="text-muted">→</span>

@@ -6,6 +6,7 @@ import type { PlanState } from "@/lib/planner/url-state";
 import { MAX_STATIONS } from "@/lib/planner/url-state";
 import { useCorrectorJoins, usePart } from "./api";
 import { ChosenPart, SmallButton } from "./chosen-part";
+import { LengthUnitProvider } from "./length-unit";
 import { PartCombobox } from "./part-combobox";
 
 const STATION_KINDS = ["filter-wheel", "filter-drawer", "oag", "tilt-plate", "other"] as const;
@@ -67,6 +68,7 @@ export function TrainChoices({ state, update }: { state: PlanState; update: Upda
   };
 
   return (
+    <LengthUnitProvider unit={state.unit}>
     <ol aria-label="The train, from sky to sensor" className="rounded-lg border border-line bg-surface p-4">
       <li aria-hidden className="mb-3 text-[11px] font-medium uppercase tracking-[0.2em] text-muted">☾ Sky side</li>
       <Stop title="Optics" tone="glass" aside="telescope, astrograph or corrector">
@@ -110,5 +112,6 @@ export function TrainChoices({ state, update }: { state: PlanState; update: Upda
       </Stop>
       <li aria-hidden className="mt-3 text-[11px] font-medium uppercase tracking-[0.2em] text-muted">▣ Sensor side</li>
     </ol>
+    </LengthUnitProvider>
   );
 }
