@@ -13,7 +13,7 @@ import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, type Ordered,
 import type { Problem } from "./problem";
 import { Reach, requestGrain } from "./reach";
 import type { Tables } from "./tables";
-import { RANK_EPS } from "./topk";
+import { decodeStationMove, RANK_EPS } from "./topk";
 import type { Chain } from "./types";
 import { type Bound, Walker } from "./walker";
 
@@ -78,10 +78,16 @@ function warningsPossible(p: Problem): boolean {
   return vignetting || (typeof optics.maxLoadG === "number" && Number.isFinite(optics.maxLoadG));
 }
 
-/** Rank one multiset in its best ordering; null when it is no solution of this phase. */
-function entryFor(p: Problem, counts: Map<number, number>, ord: Ordered, k: number, err: number, price: number, d: number): Entry | null {
-  let best = ord;
-  if (best.warned || best.detours > 0) {
+/**
+ * Rank one multiset in its best ordering; null when it is no solution. The walker itself
+ * visits every ordering except where same-face spacers sit (always at a face's first
+ * arrival), and those positions never change detours, only vignetting: so another ordering
+ * is looked for only when this one is warned and holds such a spacer. (In phase two every
+ * multiset is warned in all orderings, or its geometry was found in phase one.)
+ */
+function entryFor(p: Problem, counts: Map<number, number>, moves: readonly number[], phase: string, k: number, err: number, price: number, d: number): Entry | null {
+  let best = dress(p, moves);
+  if (best.warned && phase !== "warned" && moves.some((mv) => mv >= 0 && p.model.oFrom[mv] === p.model.oTo[mv])) {
     // Another ordering may do better; on a tie the walker's own ordering stays.
     const other = bestOrdering(p, counts);
     if (other && better(other, best)) best = other;
@@ -90,6 +96,78 @@ function entryFor(p: Problem, counts: Map<number, number>, ord: Ordered, k: numb
   return { warned: best.warned, k, detours: best.detours, err, price, d, ...keysOf(p, counts), counts, ord: best };
 }
 
+/**
+ * Exact-safe test for phase one: false when the chain so far is certainly warned, whatever
+ * follows. A step's distance to the sensor is at least the least length of itself and all
+ * after it, and (with a target) at least lo minus the most its start can be. Same-face
+ * spacers are skipped: the walk puts them at a face's first arrival, but the multiset's best
+ * ordering may move them nearer the sensor (which only moves the other steps further away).
+ */
+function certainlyWarnedCheck(p: Problem, t: Tables): ((leg: number, li: number, r: number, moves: readonly number[]) => boolean) | null {
+  const { optics, camera } = p.req;
+  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
+  const vig = typeof N === "number" && N > 0 && typeof s === "number" && s >= 0;
+  const maxLoad = optics.maxLoadG;
+  const allW = [...p.model.parts, ...p.stations, camera].every((x) => x.weightG === undefined || x.weightG >= 0);
+  const load = typeof maxLoad === "number" && Number.isFinite(maxLoad) && allW;
+  if (!vig && !load) return null;
+  const m = p.model, W = t.R + 1;
+  const lens: number[] = [], adjs: number[] = [], cas: (number | undefined)[] = [], loops: boolean[] = [];
+  return (leg, li, r, moves) => {
+    if (li < 0) return true;
+    const restMin = t.minLen[leg][li * W + r];
+    if (restMin === Infinity) return true;
+    lens.length = 0; adjs.length = 0; cas.length = 0; loops.length = 0;
+    let weight = camera.weightG ?? 0;
+    for (const mv of moves) {
+      let part;
+      if (mv >= 0) { part = m.parts[m.oPart[mv]]; lens.push(m.oLen[mv]); adjs.push(m.oAdj[mv]); loops.push(m.oFrom[mv] === m.oTo[mv]); }
+      else { part = p.stations[decodeStationMove(mv).station]; lens.push(part.lengthMm); adjs.push(Math.max(0, part.adjustMm ?? 0)); loops.push(false); }
+      cas.push(part.clearApertureMm);
+      weight += part.weightG ?? 0;
+    }
+    if (load && weight > maxLoad! + 1e-9) return false;
+    if (!vig) return true;
+    let tail = restMin;
+    let startMax = 0;
+    for (let i = 0; i < lens.length; i++) startMax += lens[i] + adjs[i];
+    for (let i = lens.length - 1; i >= 0; i--) {
+      tail += lens[i];
+      startMax -= lens[i] + adjs[i];
+      const ca = cas[i];
+      if (ca === undefined || loops[i]) continue;
+      const d = Math.max(tail, p.lo - startMax);
+      if (ca < s! + Math.max(0, d) / N! - 1e-9) return false;
+    }
+    return true;
+  };
+}
+
+/** True when every chain is warned: the camera's own opening, the optics' rear, or the fixed load. */
+function everyChainWarned(p: Problem): boolean {
+  const { optics, camera } = p.req;
+  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
+  if (typeof N === "number" && N > 0 && typeof s === "number" && s >= 0) {
+    if (camera.clearApertureMm !== undefined && camera.clearApertureMm < s + p.camLen / N - 1e-9) return true;
+    if (optics.clearApertureMm !== undefined && optics.clearApertureMm < s + Math.max(0, p.lo) / N - 1e-9) return true;
+    // A station is at least its own length, the later stations' and the camera's from the sensor.
+    let tail = p.camLen;
+    for (let j = p.stations.length - 1; j >= 0; j--) {
+      const st = p.stations[j];
+      tail += st.lengthMm;
+      if (st.clearApertureMm !== undefined && st.clearApertureMm < s + tail / N - 1e-9) return true;
+    }
+  }
+  const fixed = [...p.stations, camera];
+  if (typeof optics.maxLoadG === "number" && fixed.every((x) => (x.weightG ?? 0) >= 0) && [...p.model.parts].every((x) => (x.weightG ?? 0) >= 0)) {
+    if (fixed.reduce((w, x) => w + (x.weightG ?? 0), 0) > optics.maxLoadG + 1e-9) return true;
+  }
+  return false;
+}
+
+/** Search states phase one (clean chains only) may use before the answer is flagged truncated. */
+export const PHASE_ONE_LIMIT = 20_000;
+
 export function searchSolutions(p: Problem, t: Tables): Chain[] {
   const T = p.target;
   const reach = T === null ? null : new Reach(p, p.hi, requestGrain(p));
@@ -97,12 +175,14 @@ export function searchSolutions(p: Problem, t: Tables): Chain[] {
   const unwarnedGeos = new Set<string>();
   let top = new GeoTop(p.maxSolutions);
   let k = 0;
-  let phase: "unwarned" | "warned" = "unwarned";
+  let phase: "unwarned" | "warned" | "after-cut" = "unwarned";
   const need = T === null ? { a: -Infinity, b: Infinity } : { a: p.lo, b: p.hi };
   const W = t.R + 1;
 
+  const certain = certainlyWarnedCheck(p, t);
   const walker = new Walker(p, t, reach, {
     need: () => need,
+    alive: certain ? (leg, li, r, moves) => phase !== "unwarned" || certain(leg, li, r, moves) : undefined,
     order: {
       bound(leg, li, r, cmin, cadj, price): Bound | null {
         const ti = li * W + r;
@@ -137,28 +217,50 @@ export function searchSolutions(p: Problem, t: Tables): Chain[] {
         if (worst.detours === 0 && cmpBound({ err, price, d }, worst) > 0) return;
       }
       const counts = countsOf(p, moves);
-      const e = entryFor(p, counts, dress(p, moves), k, err, price, d);
+      if (phase === "warned" && unwarnedGeos.has(keysOf(p, counts).geoKey)) return;
+      const e = entryFor(p, counts, moves, phase, k, err, price, d);
       if (!e) return;
-      if (phase === "unwarned" ? e.warned : !e.warned || unwarnedGeos.has(e.geoKey)) return;
+      if (phase === "unwarned" ? e.warned : phase === "warned" ? !e.warned || unwarnedGeos.has(e.geoKey) : unwarnedGeos.has(e.geoKey)) return;
       top.offer(e);
     },
   });
 
+  let cut = false;
   try {
     for (const ph of ["unwarned", "warned"] as const) {
       if (ph === "warned" && (heads.length >= p.maxSolutions || !warningsPossible(p))) break;
+      if (ph === "unwarned" && everyChainWarned(p)) continue;
       phase = ph;
-      for (k = 0; k <= p.maxParts && heads.length < p.maxSolutions; k++) {
-        top = new GeoTop(p.maxSolutions - heads.length);
-        walker.run(k);
+      // Phase one may find nothing while the window is full of warned chains, and then it must
+      // walk every level to prove it. It gets its own share of the work; past that the answer
+      // is flagged `truncated` and phase two (which also takes clean chains then) goes on.
+      const rest = p.work.left;
+      if (ph === "unwarned") p.work.left = Math.min(rest, PHASE_ONE_LIMIT);
+      try {
+        for (k = 0; k <= p.maxParts && heads.length < p.maxSolutions && !p.work.exhausted; k++) {
+          top = new GeoTop(p.maxSolutions - heads.length);
+          walker.run(k);
+          heads.push(...top.items);
+        }
+      } catch (e) {
+        if (e !== OUT_OF_WORK || ph !== "unwarned") throw e;
         heads.push(...top.items);
       }
-      if (ph === "unwarned") for (const h of heads) unwarnedGeos.add(h.geoKey);
+      if (ph === "unwarned") {
+        for (const h of heads) unwarnedGeos.add(h.geoKey);
+        if (p.work.exhausted) {
+          cut = true;
+          p.work.exhausted = false;
+          p.work.left = rest - PHASE_ONE_LIMIT;
+          phase = "after-cut";
+        }
+      }
     }
   } catch (e) {
     if (e !== OUT_OF_WORK) throw e;
     heads.push(...top.items.filter((x) => !heads.includes(x)));
   }
+  if (cut) p.work.exhausted = true;
   heads.sort(cmpEntry);
   const out: Chain[] = [];
   for (const h of heads) {
