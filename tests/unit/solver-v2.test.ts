@@ -106,4 +106,24 @@ describe("solver contract v2", () => {
     expect(chain.steps.map((s) => s.lengthMm)).toEqual([5, 4.5, 17.5]); // the first takes all 3, the next 2.5
     expect(chain.errorMm).toBe(0);
   });
+
+  it("moves a narrow spacer nearer the sensor when that clears the beam (the multiset's best ordering)", () => {
+    // f/2, 20 mm diagonal, D = 5.5 + 5.5 + 5 + 2 + 2.5 = 20.5 mm. The narrow 30 mm spacer needs
+    // 20 + 20.5 / 2 = 30.25 mm right behind the flattener (vignetting), 20 + 15 / 2 = 27.5 behind a wide one.
+    const req: SolveRequest = {
+      optics: corrector({ backFocusMm: 20.5, focalRatio: 2 }),
+      camera: camera({ lengthMm: 2.5, sensorDiagonalMm: 20 }),
+      parts: [
+        spacer("n", M48, 5, { clearApertureMm: 30, quantity: 1 }),
+        spacer("w", M48, 5.5, { quantity: 2 }),
+        part("a", female(M48), male(T2), 2, { quantity: 1 }),
+      ],
+      maxParts: 4,
+    };
+    const res = solve(req);
+    expect(res.solutions.map(connectors)).toEqual(["a+n+w+w"]);
+    const chain = res.solutions[0];
+    expect(chain.warnings).toEqual([]);
+    expect(chain.steps.find((s) => s.partId === "n")!.startMm).toBeGreaterThan(0);
+  });
 });
