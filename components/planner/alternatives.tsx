@@ -5,7 +5,6 @@ import type { Chain } from "@/lib/solver";
 import { formatPrice } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
-import type { PlanChain } from "@/lib/planner/geometry";
 import { signed } from "./train-model";
 
 function connectors(chain: Chain, names: (id: string) => string): string {
@@ -16,7 +15,7 @@ function connectors(chain: Chain, names: (id: string) => string): string {
 }
 
 /** "Same train, other makers": the variants of one geometry, the ones made of parts you own marked. */
-function Variants({ chain, names }: { chain: PlanChain; names: (id: string) => string }) {
+function Variants({ chain, names }: { chain: Chain; names: (id: string) => string }) {
   const variants = chain.variants ?? [];
   if (!variants.length) return null;
   const ownsAll = (c: Chain) => c.steps.some((s) => s.role === "connector") && c.steps.every((s) => s.role !== "connector" || s.partId.endsWith("~owned"));
@@ -34,7 +33,7 @@ function Variants({ chain, names }: { chain: PlanChain; names: (id: string) => s
 }
 
 export function Alternatives({ solutions, chosen, onChoose, names, unit, currency }: {
-  solutions: PlanChain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
+  solutions: Chain[]; chosen: number; onChoose: (i: number) => void; names: (id: string) => string; unit: LengthUnit;
   /** A shop's currency when the answer is priced from its stock. */
   currency?: string;
 }) {

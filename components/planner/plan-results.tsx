@@ -2,7 +2,6 @@
 // The right column: verdict, diagram, budget strip, steps, warnings, alternatives, parts and cautions.
 import { useMemo, type ReactNode } from "react";
 import type { PlanResponse } from "@/lib/planner/api-types";
-import type { PlanChain } from "@/lib/planner/geometry";
 import type { PlanState, SolveApiRequest } from "@/lib/planner/url-state";
 import { SafetyNote } from "@/components/safety-note";
 import { Alternatives } from "./alternatives";
@@ -91,7 +90,7 @@ export function PlanResults({ result, state, update, request, renderActions }: {
         </div>
       </Section>
 
-      {result.solutions.length > 1 || (result.solutions[0] as PlanChain | undefined)?.variants?.length ? (
+      {result.solutions.length > 1 || result.solutions[0]?.variants?.length ? (
         <Section id="plan-alts" title="Alternatives" aside={`${result.solutions.length} that land in the window, best first`}>
           <Alternatives solutions={result.solutions} chosen={index} onChoose={(alt) => update({ alt })} names={names} unit={unit} currency={result.context.shop?.currency} />
         </Section>

@@ -7,11 +7,9 @@ import {
   CONNECTOR_KINDS, buildCamera, buildOptics, derivedNumbers, rowToPlanItem, rowToSolverPart,
 } from "@/lib/catalog/to-solver";
 import { AppError } from "@/lib/errors";
-import { DEFAULT_MAX_SOLUTIONS, solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
+import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import { shopStockSource } from "@/lib/shops/stock-source";
 import type { PlanItem, PlanResponse } from "./api-types";
-import { groupByGeometry, type PlanChain } from "./geometry";
-import { byPartsThenDetours, countDetours } from "./detours";
 import { joinPlan } from "./join-plan";
 import { linkEnds, solveLink } from "./telescope-link";
 import { nearestChain } from "./nearest-chain";
@@ -66,7 +64,7 @@ async function resolveRefs(input: PlanInput) {
 
 function collectIds(result: SolveResult | null, into: Set<string>) {
   if (!result) return;
-  const variants = result.solutions.flatMap((c) => (c as PlanChain).variants ?? []);
+  const variants = result.solutions.flatMap((c) => c.variants ?? []);
   for (const chain of [result.shortest, ...result.solutions, ...variants]) for (const s of chain?.steps ?? []) into.add(s.partId);
 }
 
@@ -135,13 +133,9 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   });
 
   const request: SolveRequest = { ...base, optics, camera, stations, parts };
-  // Ask for more multisets than will be shown, so other makers' copies of a chain become its
-  // variants instead of filling the list of alternatives (geometry.ts).
-  const wanted = input.maxSolutions ?? DEFAULT_MAX_SOLUTIONS;
-  const pooled = solveTrain({ ...request, maxSolutions: Math.min(50, wanted * 4) });
-  const shapes = new Map<string, Part>([...parts, ...stations].map((p) => [p.id, p]));
-  const ranked = byPartsThenDetours(pooled.solutions).map((c) => ({ ...c, detours: countDetours(c) }));
-  const result: SolveResult = { ...pooled, solutions: groupByGeometry(ranked, (id) => shapes.get(id), wanted) };
+  // The solver ranks as an expert would (contract v2) and lists other makers' copies of each
+  // chain as its variants, so the plan shows its solutions as they come.
+  const result: SolveResult = solveTrain(request);
   await shopStock?.record(result, (more) => solveTrain({ ...request, parts: more }));
   const nearest = nearestChain(request, result);
   if (telescopeRow && correctorRow && telescopeRow.specs.maxLoadG !== undefined) {
@@ -150,7 +144,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     const corrG = correctorRow.weightG ?? 0;
     let weightOf: Map<string, number> | undefined; // built only when a load warning needs it
 
-    for (const chain of [result.shortest, ...result.solutions, ...result.solutions.flatMap((c) => (c as PlanChain).variants ?? []), nearest]) {
+    for (const chain of [result.shortest, ...result.solutions, ...result.solutions.flatMap((c) => c.variants ?? []), nearest]) {
       for (const w of chain?.warnings ?? []) {
         if (w.code !== "load") continue;
         weightOf ??= new Map([...parts, ...stations, camera].map((p) => [p.id, p.weightG ?? 0]));

@@ -4,6 +4,7 @@
 import type { Problem } from "./problem";
 import { decodeStationMove } from "./topk";
 import type { Chain, Part, Step } from "./types";
+import { countDetours } from "./detours";
 import { chainWarnings } from "./warnings";
 
 type Raw = { part: Part; role: Step["role"]; reversed: boolean; len: number; adj: number };
@@ -54,6 +55,7 @@ export function materialize(p: Problem, moves: readonly number[], setting: "targ
     errorMm: p.target === null ? null : at - p.target,
     partCount,
     priceCents: price,
+    detours: countDetours(steps),
     warnings: [],
   };
   chain.warnings = chainWarnings(p, chain, raw.map((r) => r.part));

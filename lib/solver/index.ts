@@ -1,5 +1,5 @@
 // solveTrain — plan an imaging train that mates joint by joint and lands on back focus.
-// Pure: no database, no framework, no I/O. Contract: SOLVER.md (v1).
+// Pure: no database, no framework, no I/O. Contract: SOLVER.md (v2).
 
 import { materialize } from "./chain";
 import { findNearest } from "./nearest";
@@ -11,6 +11,10 @@ import { buildTables } from "./tables";
 import type { SolveRequest, SolveResult } from "./types";
 
 export * from "./types";
+export { countDetours } from "./detours";
+
+/** The SOLVER.md contract this solver implements. */
+export const contractVersion = 2;
 export { getModel as warmCatalog } from "./model";
 
 export function solveTrain(request: SolveRequest): SolveResult {
@@ -41,7 +45,7 @@ function solve(p: Problem): SolveResult {
       nearest: { belowMm: null, aboveMm: shortest.sensorDistanceMm },
     };
   }
-  const solutions = searchSolutions(p, t).map((f) => materialize(p, f.moves, "target"));
+  const solutions = searchSolutions(p, t);
   if (solutions.length === 0 && p.target !== null) {
     const nearest = findNearest(p, t);
     return { status: "out-of-reach", ...base, shortest, solutions, reason: outOfReachReason(p, nearest), nearest };

@@ -1,34 +1,188 @@
-// The window search: exact top-k distinct part multisets, level by level in the number of
-// connecting parts (fewer parts always rank first), with branch and bound on the rest of
-// the ranking key inside a level.
+// The window search, contract v2: the best multiset of each of the first maxSolutions
+// geometries by (warned, parts, detours, |error|, price, D), with up to 3 variants each.
+//
+// Two phases: first only chains with no vignetting or load warning, level by level in the
+// number of parts; then, if fewer than maxSolutions geometries were found, the warned ones
+// (every unwarned geometry is known by then, since phase one never filled up). Inside a
+// level, branch and bound on (detours ≥ 0, |error|, price, D): the walker's relaxed bound
+// leaves detours at 0, which is a valid lower bound. At each leaf the multiset gets its best
+// ordering exactly (orderings.ts) before it is ranked.
 
+import { getClasses } from "./classes";
+import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, type Ordered, spend } from "./orderings";
 import type { Problem } from "./problem";
 import { Reach, requestGrain } from "./reach";
 import type { Tables } from "./tables";
-import { cmpKey, type Found, RANK_EPS, TopK } from "./topk";
+import { decodeStationMove, RANK_EPS } from "./topk";
+import type { Chain } from "./types";
 import { type Bound, Walker } from "./walker";
 
-function multisetKey(p: Problem, moves: readonly number[]): string {
-  const ids: string[] = [];
-  for (const mv of moves) if (mv >= 0) ids.push(p.model.parts[p.model.oPart[mv]].id);
-  return ids.sort().join("\u0000");
+export type Entry = {
+  warned: boolean; k: number; detours: number; err: number; price: number; d: number;
+  msKey: string; geoKey: string; counts: Map<number, number>; ord: Ordered;
+};
+
+const cmpLen = (a: number, b: number) => (Math.abs(a - b) <= RANK_EPS ? 0 : a < b ? -1 : 1);
+const cmpPrice = (a: number, b: number) => (a === b ? 0 : a < b ? -1 : 1);
+
+export function cmpEntry(a: Entry, b: Entry): number {
+  return (a.warned === b.warned ? 0 : a.warned ? 1 : -1) || a.k - b.k || a.detours - b.detours ||
+    cmpLen(a.err, b.err) || cmpPrice(a.price, b.price) || cmpLen(a.d, b.d) ||
+    (a.msKey < b.msKey ? -1 : a.msKey > b.msKey ? 1 : 0);
+}
+
+/** A relaxed bound (detours taken as 0) against an entry of the same phase and level. */
+function cmpBound(b: Bound, worst: Entry): number {
+  if (worst.detours > 0) return -1;
+  return cmpLen(b.err, worst.err) || cmpPrice(b.price, worst.price) || cmpLen(b.d, worst.d);
+}
+
+/** The best `capacity` geometries, each held by its best multiset so far. */
+class GeoTop {
+  readonly items: Entry[] = [];
+  private readonly byGeo = new Map<string, Entry>();
+  constructor(readonly capacity: number) {}
+  get full(): boolean { return this.items.length >= this.capacity; }
+  get worst(): Entry | undefined { return this.items[this.items.length - 1]; }
+  offer(e: Entry): void {
+    const prev = this.byGeo.get(e.geoKey);
+    if (prev) {
+      if (cmpEntry(e, prev) >= 0) return;
+      this.items.splice(this.items.indexOf(prev), 1);
+    } else if (this.full && cmpEntry(e, this.worst!) >= 0) return;
+    let i = this.items.length;
+    while (i > 0 && cmpEntry(e, this.items[i - 1]) < 0) i--;
+    this.items.splice(i, 0, e);
+    this.byGeo.set(e.geoKey, e);
+    if (this.items.length > this.capacity) this.byGeo.delete(this.items.pop()!.geoKey);
+  }
+}
+
+function keysOf(p: Problem, counts: ReadonlyMap<number, number>): { msKey: string; geoKey: string } {
+  const { classOf } = getClasses(p.model);
+  const ids: string[] = [], geo: number[] = [];
+  for (const [part, c] of counts) for (let i = 0; i < c; i++) { ids.push(p.model.parts[part].id); geo.push(classOf[part]); }
+  return { msKey: ids.sort().join("\u0000"), geoKey: geo.sort((a, b) => a - b).join(",") };
+}
+
+function countsOf(p: Problem, moves: readonly number[]): Map<number, number> {
+  const counts = new Map<number, number>();
+  for (const mv of moves) if (mv >= 0) { const part = p.model.oPart[mv]; counts.set(part, (counts.get(part) ?? 0) + 1); }
+  return counts;
+}
+
+/** Can any chain of this request be warned at all? (Otherwise phase two has nothing to find.) */
+function warningsPossible(p: Problem): boolean {
+  const { optics, camera } = p.req;
+  const vignetting = typeof optics.focalRatio === "number" && optics.focalRatio > 0 && typeof camera.sensorDiagonalMm === "number";
+  return vignetting || (typeof optics.maxLoadG === "number" && Number.isFinite(optics.maxLoadG));
 }
 
 /**
- * With a target: chains whose D can be set inside [lo, hi], ranked by |error|, price, D.
- * Without: every chain, ranked by price, then D (adjustable parts at their shortest).
+ * Rank one multiset in its best ordering; null when it is no solution. The walker itself
+ * visits every ordering except where same-face spacers sit (always at a face's first
+ * arrival), and those positions never change detours, only vignetting: so another ordering
+ * is looked for only when this one is warned and holds such a spacer. (In phase two every
+ * multiset is warned in all orderings, or its geometry was found in phase one.)
  */
-export function searchSolutions(p: Problem, t: Tables): Found[] {
+function entryFor(p: Problem, counts: Map<number, number>, moves: readonly number[], phase: string, k: number, err: number, price: number, d: number): Entry | null {
+  let best = dress(p, moves);
+  if (best.warned && phase !== "warned" && moves.some((mv) => mv >= 0 && p.model.oFrom[mv] === p.model.oTo[mv])) {
+    // Another ordering may do better; on a tie the walker's own ordering stays.
+    const other = bestOrdering(p, counts);
+    if (other && better(other, best)) best = other;
+  }
+  if (p.target === null && containsBetter(p, counts, best.warned)) return null;
+  return { warned: best.warned, k, detours: best.detours, err, price, d, ...keysOf(p, counts), counts, ord: best };
+}
+
+/**
+ * Exact-safe test for phase one: false when the chain so far is certainly warned, whatever
+ * follows. A step's distance to the sensor is at least the least length of itself and all
+ * after it, and (with a target) at least lo minus the most its start can be. Same-face
+ * spacers are skipped: the walk puts them at a face's first arrival, but the multiset's best
+ * ordering may move them nearer the sensor (which only moves the other steps further away).
+ */
+function certainlyWarnedCheck(p: Problem, t: Tables): ((leg: number, li: number, r: number, moves: readonly number[]) => boolean) | null {
+  const { optics, camera } = p.req;
+  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
+  const vig = typeof N === "number" && N > 0 && typeof s === "number" && s >= 0;
+  const maxLoad = optics.maxLoadG;
+  const allW = [...p.model.parts, ...p.stations, camera].every((x) => x.weightG === undefined || x.weightG >= 0);
+  const load = typeof maxLoad === "number" && Number.isFinite(maxLoad) && allW;
+  if (!vig && !load) return null;
+  const m = p.model, W = t.R + 1;
+  const lens: number[] = [], adjs: number[] = [], cas: (number | undefined)[] = [], loops: boolean[] = [];
+  return (leg, li, r, moves) => {
+    if (li < 0) return true;
+    const restMin = t.minLen[leg][li * W + r];
+    if (restMin === Infinity) return true;
+    lens.length = 0; adjs.length = 0; cas.length = 0; loops.length = 0;
+    let weight = camera.weightG ?? 0;
+    for (const mv of moves) {
+      let part;
+      if (mv >= 0) { part = m.parts[m.oPart[mv]]; lens.push(m.oLen[mv]); adjs.push(m.oAdj[mv]); loops.push(m.oFrom[mv] === m.oTo[mv]); }
+      else { part = p.stations[decodeStationMove(mv).station]; lens.push(part.lengthMm); adjs.push(Math.max(0, part.adjustMm ?? 0)); loops.push(false); }
+      cas.push(part.clearApertureMm);
+      weight += part.weightG ?? 0;
+    }
+    if (load && weight > maxLoad! + 1e-9) return false;
+    if (!vig) return true;
+    let tail = restMin;
+    let startMax = 0;
+    for (let i = 0; i < lens.length; i++) startMax += lens[i] + adjs[i];
+    for (let i = lens.length - 1; i >= 0; i--) {
+      tail += lens[i];
+      startMax -= lens[i] + adjs[i];
+      const ca = cas[i];
+      if (ca === undefined || loops[i]) continue;
+      const d = Math.max(tail, p.lo - startMax);
+      if (ca < s! + Math.max(0, d) / N! - 1e-9) return false;
+    }
+    return true;
+  };
+}
+
+/** True when every chain is warned: the camera's own opening, the optics' rear, or the fixed load. */
+function everyChainWarned(p: Problem): boolean {
+  const { optics, camera } = p.req;
+  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
+  if (typeof N === "number" && N > 0 && typeof s === "number" && s >= 0) {
+    if (camera.clearApertureMm !== undefined && camera.clearApertureMm < s + p.camLen / N - 1e-9) return true;
+    if (optics.clearApertureMm !== undefined && optics.clearApertureMm < s + Math.max(0, p.lo) / N - 1e-9) return true;
+    // A station is at least its own length, the later stations' and the camera's from the sensor.
+    let tail = p.camLen;
+    for (let j = p.stations.length - 1; j >= 0; j--) {
+      const st = p.stations[j];
+      tail += st.lengthMm;
+      if (st.clearApertureMm !== undefined && st.clearApertureMm < s + tail / N - 1e-9) return true;
+    }
+  }
+  const fixed = [...p.stations, camera];
+  if (typeof optics.maxLoadG === "number" && fixed.every((x) => (x.weightG ?? 0) >= 0) && [...p.model.parts].every((x) => (x.weightG ?? 0) >= 0)) {
+    if (fixed.reduce((w, x) => w + (x.weightG ?? 0), 0) > optics.maxLoadG + 1e-9) return true;
+  }
+  return false;
+}
+
+/** Search states phase one (clean chains only) may use before the answer is flagged truncated. */
+export const PHASE_ONE_LIMIT = 20_000;
+
+export function searchSolutions(p: Problem, t: Tables): Chain[] {
   const T = p.target;
   const reach = T === null ? null : new Reach(p, p.hi, requestGrain(p));
-  const results: Found[] = [];
-  let top = new TopK(p.maxSolutions);
+  const heads: Entry[] = [];
+  const unwarnedGeos = new Set<string>();
+  let top = new GeoTop(p.maxSolutions);
   let k = 0;
+  let phase: "unwarned" | "warned" | "after-cut" = "unwarned";
   const need = T === null ? { a: -Infinity, b: Infinity } : { a: p.lo, b: p.hi };
   const W = t.R + 1;
 
+  const certain = certainlyWarnedCheck(p, t);
   const walker = new Walker(p, t, reach, {
     need: () => need,
+    alive: certain ? (leg, li, r, moves) => phase !== "unwarned" || certain(leg, li, r, moves) : undefined,
     order: {
       bound(leg, li, r, cmin, cadj, price): Bound | null {
         const ti = li * W + r;
@@ -36,21 +190,19 @@ export function searchSolutions(p: Problem, t: Tables): Found[] {
         const dMin = cmin + t.minLen[leg][ti];
         let err = 0, d = dMin;
         if (T !== null) {
-          // Relaxed least |D − T|: from the bitsets where built, else from the length range.
           const dMax = cmin + cadj + t.maxLen[leg][ti];
           err = Math.max(0, dMin - T, T - dMax, reach!.distance(leg, li, r, T - cmin - cadj, T - cmin));
-          // A chain that ties on |error| with the last place has D = T ± that error.
-          if (worst) d = Math.max(dMin, T - worst.err);
+          if (worst && worst.detours === 0) d = Math.max(dMin, T - worst.err);
         }
         const bound = { err, price: price + t.minPrice[leg][ti], d };
         // Ties with the current last place are pruned too: equal keys may come out either way.
-        return worst && cmpKey({ k, ...bound }, worst) >= 0 ? null : bound;
+        return worst && cmpBound(bound, worst) >= 0 ? null : bound;
       },
       verdict(b) {
         if (!top.full) return "go";
         const worst = top.worst!;
-        if (b.err > worst.err + RANK_EPS) return "stop"; // siblings come in |error| order
-        return cmpKey({ k, ...b }, worst) >= 0 ? "skip" : "go";
+        if (worst.detours === 0 && b.err > worst.err + RANK_EPS) return "stop"; // siblings come in |error| order
+        return cmpBound(b, worst) >= 0 ? "skip" : "go";
       },
     },
     complete(dMin, dMax, price, moves) {
@@ -60,16 +212,117 @@ export function searchSolutions(p: Problem, t: Tables): Found[] {
         if (d < p.lo || d > p.hi) return;
         err = Math.abs(d - T);
       }
-      const key = { k, err, price, d };
-      if (top.full && cmpKey(key, top.worst!) > 0) return;
-      top.offer({ ...key, moves: moves.slice(), msKey: multisetKey(p, moves) });
+      if (top.full) {
+        const worst = top.worst!;
+        if (worst.detours === 0 && cmpBound({ err, price, d }, worst) > 0) return;
+      }
+      const counts = countsOf(p, moves);
+      if (phase === "warned" && unwarnedGeos.has(keysOf(p, counts).geoKey)) return;
+      const e = entryFor(p, counts, moves, phase, k, err, price, d);
+      if (!e) return;
+      if (phase === "unwarned" ? e.warned : phase === "warned" ? !e.warned || unwarnedGeos.has(e.geoKey) : unwarnedGeos.has(e.geoKey)) return;
+      top.offer(e);
     },
   });
 
-  for (k = 0; k <= p.maxParts && results.length < p.maxSolutions; k++) {
-    top = new TopK(p.maxSolutions - results.length);
-    walker.run(k);
-    results.push(...top.items);
+  let cut = false;
+  try {
+    for (const ph of ["unwarned", "warned"] as const) {
+      if (ph === "warned" && (heads.length >= p.maxSolutions || !warningsPossible(p))) break;
+      if (ph === "unwarned" && everyChainWarned(p)) continue;
+      phase = ph;
+      // Phase one may find nothing while the window is full of warned chains, and then it must
+      // walk every level to prove it. It gets its own share of the work; past that the answer
+      // is flagged `truncated` and phase two (which also takes clean chains then) goes on.
+      const rest = p.work.left;
+      if (ph === "unwarned") p.work.left = Math.min(rest, PHASE_ONE_LIMIT);
+      try {
+        for (k = 0; k <= p.maxParts && heads.length < p.maxSolutions && !p.work.exhausted; k++) {
+          top = new GeoTop(p.maxSolutions - heads.length);
+          walker.run(k);
+          heads.push(...top.items);
+        }
+      } catch (e) {
+        if (e !== OUT_OF_WORK || ph !== "unwarned") throw e;
+        heads.push(...top.items);
+      }
+      if (ph === "unwarned") {
+        for (const h of heads) unwarnedGeos.add(h.geoKey);
+        if (p.work.exhausted) {
+          cut = true;
+          p.work.exhausted = false;
+          p.work.left = rest - PHASE_ONE_LIMIT;
+          phase = "after-cut";
+        }
+      }
+    }
+  } catch (e) {
+    if (e !== OUT_OF_WORK) throw e;
+    heads.push(...top.items.filter((x) => !heads.includes(x)));
   }
-  return results;
+  if (cut) p.work.exhausted = true;
+  heads.sort(cmpEntry);
+  const out: Chain[] = [];
+  for (const h of heads) {
+    let variants: Chain[] = [];
+    try { variants = variantsOf(p, h).map((v) => v.ord.chain); } catch (e) { if (e !== OUT_OF_WORK) throw e; }
+    out.push({ ...h.ord.chain, variants });
+  }
+  return out;
+}
+
+/**
+ * The next up to 3 multisets of the head's geometry, best first: every choice of makers per
+ * class (stock honoured), each in its best ordering, branch and bound on price.
+ */
+function variantsOf(p: Problem, head: Entry): Entry[] {
+  const { classOf, members } = getClasses(p.model);
+  const need = new Map<number, number>();
+  for (const [part, c] of head.counts) need.set(classOf[part], (need.get(classOf[part]) ?? 0) + c);
+  const classes = [...need.entries()];
+  if (classes.every(([c]) => members[c].length === 1)) return [];
+  const price = (i: number) => p.model.parts[i].priceCents ?? Infinity;
+  const minRest: number[] = new Array(classes.length + 1).fill(0);
+  for (let i = classes.length - 1; i >= 0; i--) minRest[i] = minRest[i + 1] + classes[i][1] * price(members[classes[i][0]][0]);
+  const best: Entry[] = [];
+  const counts = new Map<number, number>();
+  const q = p.model.quantity;
+
+  const leaf = (cost: number) => {
+    const { msKey } = keysOf(p, counts);
+    if (msKey === head.msKey) return;
+    const ord = bestOrdering(p, counts);
+    if (!ord) return;
+    const copy = new Map(counts);
+    if (p.target === null && containsBetter(p, copy, ord.warned)) return;
+    const e: Entry = { ...head, warned: ord.warned, detours: ord.detours, price: cost, msKey, counts: copy, ord };
+    if (best.length >= 3 && cmpEntry(e, best[2]) >= 0) return;
+    let i = best.length;
+    while (i > 0 && cmpEntry(e, best[i - 1]) < 0) i--;
+    best.splice(i, 0, e);
+    if (best.length > 3) best.pop();
+  };
+  // Class ci, member index j within it, slots still to fill in this class.
+  const rec = (ci: number, j: number, left: number, cost: number): void => {
+    spend(p);
+    if (ci === classes.length) { leaf(cost); return; }
+    const list = members[classes[ci][0]];
+    if (left === 0) { rec(ci + 1, 0, ci + 1 < classes.length ? classes[ci + 1][1] : 0, cost); return; }
+    if (j >= list.length) return;
+    // Lower bound: the rest at the cheapest remaining member (members are sorted by price).
+    if (best.length >= 3) {
+      const w = best[2];
+      const lb = cost + left * price(list[j]) + minRest[ci + 1];
+      if (!w.warned && w.detours === 0 && lb > w.price) return;
+    }
+    const part = list[j];
+    const most = Math.min(left, q[part]);
+    for (let c = most; c >= 0; c--) {
+      if (c > 0) counts.set(part, c); else counts.delete(part);
+      rec(ci, j + 1, left - c, c > 0 ? cost + c * price(part) : cost); // 0 × unknown price is no NaN
+    }
+    counts.delete(part);
+  };
+  rec(0, 0, classes[0]?.[1] ?? 0, 0);
+  return best;
 }

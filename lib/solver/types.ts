@@ -1,4 +1,4 @@
-// The solver contract (SOLVER.md, v1). Field names here are the public API: add, never rename.
+// The solver contract (SOLVER.md, v2). Field names here are the public API: add, never rename.
 
 export type Gender = "male" | "female";
 
@@ -82,7 +82,17 @@ export type Chain = {
   partCount: number;
   /** Σ connecting parts' prices; null when any is unknown. */
   priceCents: number | null;
+  /**
+   * Joints per leg that return to an interface already used in that leg after leaving it
+   * (M48 → M63 → M48 is one), contract v2 §1.3.
+   */
+  detours: number;
   warnings: ChainWarning[];
+  /**
+   * Solutions only: the next up to 3 multisets of the same geometry (equivalent parts from
+   * other makers), best first, each in its best ordering. Variants themselves carry none.
+   */
+  variants?: Chain[];
 };
 
 export type SolveStatus = "ok" | "no-connection" | "too-long" | "out-of-reach";
@@ -99,7 +109,10 @@ export type SolveResult = {
   filterShiftMm: number;
   /** The minimal-length connection, ignoring the target (honouring quantity, maxParts, stations). */
   shortest: Chain | null;
-  /** Chains inside the window, best first. */
+  /**
+   * Chains inside the window (every connection without a back focus), one per geometry, the
+   * best multiset of each of the first maxSolutions geometries in rank order (contract v2).
+   */
   solutions: Chain[];
   /** One plain sentence whenever status is not "ok". */
   reason?: string;

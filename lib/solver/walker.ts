@@ -25,6 +25,8 @@ export type Searcher = {
     verdict(b: Bound): "go" | "skip" | "stop";
   };
   complete(dMin: number, dMax: number, price: number, moves: readonly number[], used: Int32Array): void;
+  /** Optional exact-safe pruning on the chain so far (e.g. "certainly warned"); false = prune. */
+  alive?(leg: number, li: number, r: number, moves: readonly number[]): boolean;
 };
 
 const SLACK = 1e-9;
@@ -152,6 +154,7 @@ export class Walker {
     this.tick();
     const r = this.k - u;
     if (!this.viable(leg, li, r, cmin, cadj)) return;
+    if (s.alive && !s.alive(leg, li, r, this.moves)) return;
     if (s.order) {
       if (!s.order.bound(leg, li, r, cmin, cadj, price)) return;
       this.ordered(leg, f, cmin, cadj, price, u, loopMin);
@@ -233,6 +236,11 @@ export class Walker {
         this.used[part]++;
       }
       this.moves.push(kid.move);
+      if (s.alive && !s.alive(kid.leg, p.loc[kid.leg][kid.to], this.k - kid.u, this.moves)) {
+        this.moves.pop();
+        if (part >= 0) this.used[part]--;
+        continue;
+      }
       if (!kid.loop) this.visit[kid.to]++;
       this.tick();
       this.ordered(kid.leg, kid.to, cmin + kid.len, cadj + kid.adj, price + kid.cost, kid.u, kid.loop ? kid.move : -1);

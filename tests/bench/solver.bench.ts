@@ -68,7 +68,7 @@ function layeredGraph(layers: Graph, req: SolveRequest): { graph: Graph; from: s
   return { graph, from, to };
 }
 
-type Row = { n: number; build: number; first: number; solve: number; dijkstra: number; statuses: string; solutions: number };
+type Row = { n: number; build: number; first: number; solve: number; dijkstra: number; statuses: string; solutions: number; truncated: number };
 
 function measure(n: number, shape: Shape): Row {
   const parts = makeCatalog(n, shape);
@@ -77,13 +77,14 @@ function measure(n: number, shape: Shape): Row {
   warmCatalog(parts);
   const requests = makeRequests(parts, REQUESTS);
   const statuses = new Map<string, number>();
-  let solutions = 0;
+  let solutions = 0, truncated = 0;
   const firsts: number[] = [];
   for (const req of requests) {
     const [ms, res] = time(() => solveTrain(req));
     firsts.push(ms);
     statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
     solutions += res.solutions.length;
+    if (res.truncated) truncated++;
   }
   const solves: number[] = [];
   for (let round = 0; round < ROUNDS; round++) for (const req of requests) solves.push(time(() => solveTrain(req))[0]);
@@ -95,15 +96,15 @@ function measure(n: number, shape: Shape): Row {
   }
   return {
     n, build: median(builds), first: median(firsts), solve: median(solves), dijkstra: median(plain),
-    statuses: [...statuses].map(([s, c]) => `${c} ${s}`).join(", "), solutions: solutions / requests.length,
+    statuses: [...statuses].map(([s, c]) => `${c} ${s}`).join(", "), solutions: solutions / requests.length, truncated,
   };
 }
 
 function table(shape: Shape, rows: Row[]): string {
   const lines = [
-    `| parts | graph build ms | median solve ms | first solve ms | dijkstra.bidirectional ms | ratio | statuses (${REQUESTS} requests) | solutions / request |`,
-    "|---:|---:|---:|---:|---:|---:|---|---:|",
-    ...rows.map((r) => `| ${r.n.toLocaleString("en")} | ${r.build.toFixed(1)} | ${r.solve.toFixed(2)} | ${r.first.toFixed(2)} | ${r.dijkstra.toFixed(3)} | ${(r.solve / r.dijkstra).toFixed(2)}× | ${r.statuses} | ${r.solutions.toFixed(1)} |`),
+    `| parts | graph build ms | median solve ms | first solve ms | dijkstra.bidirectional ms | ratio | statuses (${REQUESTS} requests) | solutions / request | truncated |`,
+    "|---:|---:|---:|---:|---:|---:|---|---:|---:|",
+    ...rows.map((r) => `| ${r.n.toLocaleString("en")} | ${r.build.toFixed(1)} | ${r.solve.toFixed(2)} | ${r.first.toFixed(2)} | ${r.dijkstra.toFixed(3)} | ${(r.solve / r.dijkstra).toFixed(2)}× | ${r.statuses} | ${r.solutions.toFixed(1)} | ${r.truncated} |`),
   ];
   const growth = (f: (r: Row) => number) => rows.slice(1).map((r, i) => `×${(f(r) / f(rows[i])).toFixed(1)}`).join(", then ");
   const parts = rows.slice(1).map((r, i) => `×${(r.n / rows[i].n).toFixed(0)}`).join(", then ");
@@ -124,7 +125,7 @@ const env = `Node ${process.version}, ${process.platform}/${process.arch}; whole
 console.log(env);
 if (process.argv.includes("--write")) {
   writeFileSync(new URL("./RESULTS.md", import.meta.url), [
-    "# Solver benchmark",
+    "# Solver benchmark (contract v2)",
     "",
     "`npm run bench` (tests/bench/solver.bench.ts). 40 interfaces, two stations (an off-axis guider and a reversible filter wheel),",
     "55 mm back focus plus 2 mm of filter glass, 12 different requests per catalog, 5 rounds; the graph is built once",

@@ -184,7 +184,7 @@ describe("stock and the shortest chain", () => {
 });
 
 describe("without a back focus", () => {
-  it("returns every connection, fewest parts first, then price (unknown last), then length", () => {
+  it("returns every connection, fewest parts first, then price (unknown last), then length — but no best route plus a spacer", () => {
     const parts = [adapter48, part("a48-cheap", female(M48), male(T2), 7, { priceCents: 500 }), part("a48-unpriced", female(M48), male(T2), 1),
       spacer("s1", T2, 1, { priceCents: 100 })];
     const res = solve({ optics: corrector({ backFocusMm: undefined }), camera: camera(), parts, maxSolutions: 4 });
@@ -192,7 +192,8 @@ describe("without a back focus", () => {
     expect(res.targetMm).toBeNull();
     expect(res.toleranceMm).toBeNull();
     expect(res.solutions.map((s) => s.steps.filter((x) => x.role === "connector").map((x) => x.partId).join("+")))
-      .toEqual(["a48-cheap", "a48", "a48-unpriced", "a48-cheap+s1"]);
+      // v1 also listed "a48-cheap+s1"; contract v2 §4: a better route plus a spacer is not an alternative.
+      .toEqual(["a48-cheap", "a48", "a48-unpriced"]);
     expect(res.solutions.every((s) => s.errorMm === null)).toBe(true);
     expect(res.solutions[2].priceCents).toBeNull();
   });

@@ -1,6 +1,7 @@
-// solveTrain against a brute-force enumerator (tests/unit/support/brute-force.ts) on small
-// random catalogs: same status, same shortest D, the same ranked solution multisets (ties
-// in the full ranking key compared as sets), same nearest distances, and every chain sound.
+// solveTrain against a brute-force enumerator (tests/unit/support/brute-force.ts) that applies
+// contract v2 literally, on small random catalogs: same status, same shortest D, the same
+// solution geometries and their best multisets, the same variants (ties in the full ranking
+// key compared as sets), Chain.detours and warnedness, same nearest distances, every chain sound.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { solveTrain, type Part, type Port, type SolveRequest, type SolveResult } from "@/lib/solver";
@@ -34,9 +35,12 @@ function partArb(ifaces: string[], coarse: boolean, id: string): fc.Arbitrary<Pa
     reversible: fc.boolean(),
     quantity: optional(fc.integer({ min: 1, max: 3 }), 0.6),
     priceCents: optional(fc.integer({ min: 0, max: 40 }).map((x) => x * 100), 0.8),
+    clearApertureMm: optional(fc.constantFrom(15, 25, 30, 35, 45), 0.5),
+    weightG: optional(fc.integer({ min: 0, max: 400 }), 0.5),
     named: fc.boolean(),
-  }).map(({ named, rearPort, sameThread, ...p }) => ({
+  }).map(({ named, rearPort, sameThread, clearApertureMm, weightG, ...p }) => ({
     id, ...(named ? { name: `Part ${id}` } : {}), ...p,
+    ...(clearApertureMm !== undefined ? { clearApertureMm } : {}), ...(weightG !== undefined ? { weightG } : {}),
     // Half the parts keep one thread (spacers, couplers), the others adapt between two.
     rear: sameThread ? { interface: p.front.interface, gender: rearPort.gender } : rearPort,
   }));
@@ -46,7 +50,7 @@ function partArb(ifaces: string[], coarse: boolean, id: string): fc.Arbitrary<Pa
 export type AimedRequest = SolveRequest & { aim?: { pick: number; offset: number } };
 export const requestArb: fc.Arbitrary<AimedRequest> = fc.record({
   nIf: fc.integer({ min: 3, max: 6 }),
-  nParts: fc.integer({ min: 2, max: 8 }),
+  nParts: fc.integer({ min: 2, max: 7 }),
   nStations: fc.integer({ min: 0, max: 2 }),
   coarse: fc.boolean(),
 }).chain(({ nIf, nParts, nStations, coarse }) => {
@@ -66,6 +70,19 @@ export const requestArb: fc.Arbitrary<AimedRequest> = fc.record({
     filters: fc.array(fc.record({ thicknessMm: fc.constantFrom(1, 2, 3), refractiveIndex: optional(fc.constantFrom(1.5, 1.5168)) }), { maxLength: 2 }),
     maxParts: fc.oneof({ arbitrary: fc.integer({ min: 1, max: 4 }), weight: 9 }, { arbitrary: fc.constant(0), weight: 1 }),
     maxSolutions: optional(fc.integer({ min: 1, max: 6 }), 0.8),
+    /** Warning inputs (vignetting, load), so that warned chains rank after clean ones. */
+    focalRatio: optional(fc.constantFrom(2, 4, 5), 0.7),
+    opticsAperture: optional(fc.constantFrom(25, 40, 60), 0.3),
+    maxLoadG: optional(fc.integer({ min: 0, max: 1200 }), 0.3),
+    sensor: optional(fc.constantFrom(10, 20, 30), 0.8),
+    cameraAperture: optional(fc.constantFrom(25, 35, 50), 0.4),
+    cameraWeight: optional(fc.integer({ min: 0, max: 600 }), 0.4),
+    /** Other makers' copies of some parts: same ports, length and adjustment; price, aperture, weight, stock and reversibility their own. */
+    clones: fc.array(fc.record({
+      of: fc.nat(), priceCents: optional(fc.integer({ min: 0, max: 40 }).map((x) => x * 100), 0.8),
+      clearApertureMm: optional(fc.constantFrom(15, 30, 45), 0.5), weightG: optional(fc.integer({ min: 0, max: 400 }), 0.4),
+      reversible: fc.boolean(), quantity: optional(fc.integer({ min: 1, max: 3 }), 0.5),
+    }), { maxLength: 3 }),
     /** Per leg, maybe a part that bridges it directly, so that more requests connect. */
     bridges: fc.array(fc.option(fc.record({ lengthMm: length(coarse, 15), quantity: optional(fc.integer({ min: 1, max: 2 }), 0.5) }), { nil: undefined }), { minLength: 3, maxLength: 3 }),
   }).map((g) => {
@@ -77,15 +94,31 @@ export const requestArb: fc.Arbitrary<AimedRequest> = fc.record({
       const b = g.bridges[leg];
       if (b && from && ends[leg]) extra.push({ id: `b${leg}`, front: flip(from), rear: flip(ends[leg]), ...b });
     });
-    return { ...g, parts: [...g.parts, ...extra] };
+    const all = [...g.parts, ...extra];
+    const clones = g.clones.map(({ of, ...c }, i): Part => {
+      const src = all[of % all.length];
+      return { id: `c${i}`, front: src.front, rear: src.rear, lengthMm: src.lengthMm, ...(src.adjustMm !== undefined ? { adjustMm: src.adjustMm } : {}),
+        reversible: c.reversible, ...(c.priceCents !== undefined ? { priceCents: c.priceCents } : {}),
+        ...(c.clearApertureMm !== undefined ? { clearApertureMm: c.clearApertureMm } : {}), ...(c.weightG !== undefined ? { weightG: c.weightG } : {}),
+        ...(c.quantity !== undefined ? { quantity: c.quantity } : {}) };
+    });
+    return { ...g, parts: [...all, ...clones] };
   }).map((g): SolveRequest & { aim?: { pick: number; offset: number } } => ({
     aim: g.aim,
     optics: {
       id: "optics", name: "Corrector", front: null, rear: g.opticsRear, lengthMm: 0,
       ...(g.backFocus !== undefined ? { backFocusMm: g.backFocus } : {}),
       ...(g.tolerance !== undefined ? { backFocusToleranceMm: g.tolerance } : {}),
+      ...(g.focalRatio !== undefined ? { focalRatio: g.focalRatio } : {}),
+      ...(g.opticsAperture !== undefined ? { clearApertureMm: g.opticsAperture } : {}),
+      ...(g.maxLoadG !== undefined ? { maxLoadG: g.maxLoadG } : {}),
     },
-    camera: { id: "camera", front: g.cameraFront, rear: null, lengthMm: g.cameraLen, ...(g.cameraAdj !== undefined ? { adjustMm: g.cameraAdj } : {}) },
+    camera: {
+      id: "camera", front: g.cameraFront, rear: null, lengthMm: g.cameraLen, ...(g.cameraAdj !== undefined ? { adjustMm: g.cameraAdj } : {}),
+      ...(g.sensor !== undefined ? { sensorDiagonalMm: g.sensor } : {}),
+      ...(g.cameraAperture !== undefined ? { clearApertureMm: g.cameraAperture } : {}),
+      ...(g.cameraWeight !== undefined ? { weightG: g.cameraWeight } : {}),
+    },
     stations: g.stations,
     filters: g.filters,
     parts: g.parts,
@@ -126,33 +159,55 @@ export function disagreements(req: SolveRequest, res: SolveResult, oracle: Oracl
   if (Math.abs(res.filterShiftMm - oracle.filterShift) > 1e-12) out.push("filter shift differs");
   if (res.status !== "ok" && !res.reason) out.push("no reason");
 
-  const wanted = oracle.status === "ok" ? Math.min(req.maxSolutions ?? 5, oracle.ranked.length) : 0;
+  // Contract v2: one solution per geometry, its best multiset; up to 3 variants of the same
+  // geometry after it. Ties in the full key may come out either way, so every list is checked
+  // as "a best-first prefix": sorted, the right length, nothing strictly better left out.
+  const wanted = oracle.status === "ok" ? Math.min(req.maxSolutions ?? 5, oracle.geometries.length) : 0;
   if (res.solutions.length !== wanted) out.push(`${res.solutions.length} solutions, oracle wants ${wanted}`);
   const byMultiset = new Map(oracle.ranked.map((s) => [s.multiset, s]));
-  const mine: OracleSolution[] = [];
-  const seen = new Set<string>();
-  for (const chain of res.solutions) {
+  const geometryOf = new Map(oracle.geometries.map((g) => [g[0].geometry, g]));
+  const check = (chain: SolveResult["solutions"][number], what: string): OracleSolution | null => {
     const ms = multisetOfChain(chain);
-    if (seen.has(ms)) out.push(`multiset ${ms} twice`);
-    seen.add(ms);
-    out.push(...chainProblems(req, chain, oracle.target, "target").map((p) => `${ms}: ${p}`));
+    out.push(...chainProblems(req, chain, oracle.target, "target").map((p) => `${what} ${ms}: ${p}`));
     const o = byMultiset.get(ms);
-    if (!o) { out.push(`multiset ${ms} is not a solution`); continue; }
+    if (!o) { out.push(`${what} ${ms} is not a solution`); return null; }
+    const warned = chain.warnings.some((w) => w.code === "vignetting" || w.code === "load");
     if (chain.partCount !== o.k || chain.priceCents !== o.price || Math.abs(chain.sensorDistanceMm - o.d) > 1e-6 ||
-      (o.err === null ? chain.errorMm !== null : Math.abs(chain.errorMm! - o.err) > 1e-6)) {
-      out.push(`multiset ${ms}: got k=${chain.partCount} err=${chain.errorMm} price=${chain.priceCents} D=${chain.sensorDistanceMm}, oracle ${JSON.stringify(o)}`);
+      (o.err === null ? chain.errorMm !== null : Math.abs(chain.errorMm! - o.err) > 1e-6) || warned !== o.warned || chain.detours !== o.detours) {
+      out.push(`${what} ${ms}: got k=${chain.partCount} err=${chain.errorMm} price=${chain.priceCents} D=${chain.sensorDistanceMm} warned=${warned} detours=${chain.detours}, oracle ${JSON.stringify(o)}`);
     }
-    mine.push(o);
-  }
-  for (let i = 1; i < mine.length; i++) if (compareSolutions(mine[i - 1], mine[i]) > 0) out.push(`ranking broken at ${i}`);
-  if (wanted > 0 && mine.length === wanted) {
-    const cutoff = oracle.ranked[wanted - 1];
-    for (const s of oracle.ranked) {
-      if (compareSolutions(s, cutoff) < 0 && !seen.has(s.multiset)) out.push(`missing ${s.multiset} ${JSON.stringify(s)}`);
+    return o;
+  };
+  const prefix = (got: OracleSolution[], all: OracleSolution[], n: number, what: string, key: (s: OracleSolution) => string) => {
+    for (let i = 1; i < got.length; i++) if (compareSolutions(got[i - 1], got[i]) > 0) out.push(`${what}: ranking broken at ${i}`);
+    if (got.length !== n) out.push(`${what}: ${got.length}, oracle wants ${n}`);
+    if (n === 0 || got.length !== n) return;
+    const keys = new Set(got.map(key));
+    if (keys.size !== got.length) out.push(`${what}: a repeat`);
+    const cutoff = got[n - 1];
+    for (const s of all) if (compareSolutions(s, cutoff) < 0 && !keys.has(key(s))) out.push(`${what}: missing ${key(s)} ${JSON.stringify(s)}`);
+  };
+  const heads: OracleSolution[] = [];
+  for (const chain of res.solutions) {
+    const o = check(chain, "solution");
+    if (!o) continue;
+    heads.push(o);
+    const g = geometryOf.get(o.geometry)!;
+    if (compareSolutions(o, g[0]) !== 0) out.push(`solution ${o.multiset} is not the best of its geometry (${g[0].multiset})`);
+    if (!Array.isArray(chain.variants)) { out.push(`solution ${o.multiset}: no variants array`); continue; }
+    const variants: OracleSolution[] = [];
+    for (const v of chain.variants) {
+      if (v.variants !== undefined) out.push("a variant carries variants");
+      const ov = check(v, "variant");
+      if (!ov) continue;
+      if (ov.geometry !== o.geometry) out.push(`variant ${ov.multiset} is another geometry than ${o.multiset}`);
+      variants.push(ov);
     }
-    for (const s of mine) if (compareSolutions(s, cutoff) > 0) out.push(`${s.multiset} ranks below the cut-off`);
-    if (mine[0].k !== oracle.ranked[0].k) out.push(`best part count ${mine[0].k}, oracle ${oracle.ranked[0].k}`);
+    // Head and variants together: the best min(4, n) multisets of the geometry.
+    prefix([o, ...variants], g, Math.min(4, g.length), `geometry of ${o.multiset}`, (s) => s.multiset);
   }
+  prefix(heads, oracle.geometries.map((g) => g[0]), wanted, "solutions", (s) => s.geometry);
+  if (wanted > 0 && heads.length > 0 && heads[0].k !== oracle.geometries[0][0].k) out.push(`best part count ${heads[0].k}, oracle ${oracle.geometries[0][0].k}`);
   if (oracle.status === "out-of-reach") {
     const n = res.nearest;
     const o = oracle.nearest!;
@@ -165,6 +220,7 @@ export function disagreements(req: SolveRequest, res: SolveResult, oracle: Oracl
 describe("solveTrain agrees with a brute-force enumerator", () => {
   it("on random small catalogs (status, shortest, ranked multisets, nearest, chain invariants)", () => {
     const statuses = new Map<string, number>();
+    const features = new Map<string, number>();
     fc.assert(
       fc.property(requestArb, ({ aim, ...req }) => {
         if (aim && req.optics.backFocusMm !== undefined) {
@@ -175,14 +231,22 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
         }
         const oracle = bruteForce(req);
         statuses.set(oracle.status, (statuses.get(oracle.status) ?? 0) + 1);
-        expect(disagreements(req, solveTrain(req), oracle)).toEqual([]);
+        const res = solveTrain(req);
+        const seen = (what: string, yes: boolean) => { if (yes) features.set(what, (features.get(what) ?? 0) + 1); };
+        seen("variants", res.solutions.some((c) => (c.variants ?? []).length > 0));
+        seen("warned after clean", oracle.ranked.some((s) => s.warned) && oracle.ranked.some((s) => !s.warned));
+        seen("detours", oracle.ranked.some((s) => s.detours > 0));
+        seen("padding dropped", oracle.target === null && enumerateChains(req).some((c) => !oracle.ranked.some((s) => s.multiset === c.multiset)));
+        expect(disagreements(req, res, oracle)).toEqual([]);
         expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
       }),
-      { numRuns: 600 },
+      { numRuns: 800 },
     );
     // The generator must actually reach every status, or the comparison proves little.
     for (const s of ["ok", "no-connection", "too-long", "out-of-reach"]) expect(statuses.get(s) ?? 0).toBeGreaterThan(10);
-  });
+    // And every v2 rule must actually come up.
+    for (const f of ["variants", "warned after clean", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
+  }, 60_000);
 
   it("on catalogs dense with same-face spacers (loops), with ties in price and length", () => {
     const spacerCatalog = fc.record({
@@ -208,4 +272,50 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
       expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
     }), { numRuns: 150 });
   });
+
+  it("on two-thread catalogs full of step rings, narrow and heavy parts and other makers' copies", () => {
+    // Two threads T and M, spacers on both, step rings between them (T → M → T is a detour),
+    // lengths from a short list so that equivalent parts from several makers are common.
+    const face = (i: string, g: "male" | "female"): Port => ({ interface: i, gender: g });
+    const kinds = [
+      [face("T", "female"), face("T", "male")], [face("M", "female"), face("M", "male")],
+      [face("T", "female"), face("M", "male")], [face("M", "female"), face("T", "male")],
+    ] as const;
+    const trade = fc.record({
+      parts: fc.array(fc.record({
+        kind: fc.integer({ min: 0, max: 3 }), lengthMm: fc.constantFrom(1, 2, 3, 5, 10),
+        priceCents: optional(fc.constantFrom(100, 200, 300), 0.85), clearApertureMm: optional(fc.constantFrom(20, 30, 45), 0.7),
+        weightG: optional(fc.constantFrom(20, 150, 300), 0.7), quantity: optional(fc.integer({ min: 1, max: 2 }), 0.5),
+        reversible: fc.boolean(), adjustMm: optional(fc.constantFrom(1, 3), 0.15),
+      }), { minLength: 3, maxLength: 8 }),
+      backFocus: optional(fc.integer({ min: 20, max: 60 }).map((x) => x / 2), 0.75),
+      cameraIface: fc.constantFrom("T", "M"),
+      station: fc.boolean(),
+      maxLoadG: optional(fc.constantFrom(350, 500, 900), 0.6),
+      maxParts: fc.integer({ min: 1, max: 3 }),
+      maxSolutions: fc.integer({ min: 1, max: 4 }),
+    }).map((g): SolveRequest => ({
+      optics: { id: "o", front: null, rear: face("T", "male"), lengthMm: 0, focalRatio: 4, clearApertureMm: 50,
+        ...(g.backFocus !== undefined ? { backFocusMm: g.backFocus } : {}), ...(g.maxLoadG !== undefined ? { maxLoadG: g.maxLoadG } : {}) },
+      camera: { id: "c", front: face(g.cameraIface, "female"), rear: null, lengthMm: 6.5, sensorDiagonalMm: 22, clearApertureMm: 40, weightG: 200 },
+      stations: g.station ? [{ id: "w", front: face("T", "female"), rear: face("T", "male"), lengthMm: 5, clearApertureMm: 30, weightG: 100 }] : [],
+      parts: g.parts.map(({ kind, ...p }, i) => ({ id: `p${i}`, front: kinds[kind][0], rear: kinds[kind][1], ...p })),
+      maxParts: g.maxParts,
+      maxSolutions: g.maxSolutions,
+    }));
+    const features = new Map<string, number>();
+    fc.assert(fc.property(trade, (req) => {
+      const oracle = bruteForce(req);
+      const res = solveTrain(req);
+      const seen = (what: string, yes: boolean) => { if (yes) features.set(what, (features.get(what) ?? 0) + 1); };
+      seen("variants", res.solutions.some((c) => (c.variants ?? []).length > 0));
+      seen("warned variant of a clean head", res.solutions.some((c) => !c.warnings.some((w) => w.code !== "image-circle") && (c.variants ?? []).some((v) => v.warnings.length > 0)));
+      seen("warned ranks after more parts", oracle.geometries.some((g, i) => oracle.geometries.slice(i + 1).some((h) => h[0].k < g[0].k)));
+      seen("detours", res.solutions.some((c) => c.detours > 0));
+      seen("padding dropped", oracle.target === null && enumerateChains(req).some((c) => !oracle.ranked.some((s) => s.multiset === c.multiset)));
+      expect(disagreements(req, res, oracle)).toEqual([]);
+      expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
+    }), { numRuns: 1500 });
+    for (const f of ["variants", "warned variant of a clean head", "warned ranks after more parts", "detours", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
+  }, 60_000);
 });

@@ -4,7 +4,7 @@
 import type { Camera, Gender, Optics, Part, Port, SolveRequest } from "@/lib/solver";
 
 export type OracleChain = {
-  items: { part: Part; role: "connector" | "station" | "camera"; reversed: boolean }[];
+  items: { part: Part; role: "connector" | "station" | "camera"; reversed: boolean; joint: string }[];
   dMin: number;
   dMax: number;
   partCount: number;
@@ -12,7 +12,11 @@ export type OracleChain = {
   multiset: string;
 };
 
-export type OracleSolution = { multiset: string; k: number; err: number | null; price: number | null; d: number };
+/** One multiset in its best ordering, with every part of the v2 ranking key. */
+export type OracleSolution = {
+  multiset: string; geometry: string; k: number; err: number | null; price: number | null; d: number;
+  warned: boolean; detours: number;
+};
 
 export type Oracle = {
   status: "ok" | "no-connection" | "too-long" | "out-of-reach";
@@ -23,6 +27,8 @@ export type Oracle = {
   shortestD: number | null;
   /** Every distinct multiset in the window (or every one without a target), best first. */
   ranked: OracleSolution[];
+  /** Per geometry, best first (a geometry ranks as its best multiset): its multisets, best first. */
+  geometries: OracleSolution[][];
   nearest: { belowMm: number | null; aboveMm: number | null } | null;
 };
 
@@ -50,7 +56,7 @@ export function enumerateChains(req: SolveRequest): OracleChain[] {
   const path: OracleChain["items"] = [];
 
   const finish = () => {
-    const items = [...path, { part: req.camera, role: "camera" as const, reversed: false }];
+    const items = [...path, { part: req.camera, role: "camera" as const, reversed: false, joint: req.camera.front!.interface }];
     let dMin = 0, dMax = 0, price: number | null = 0, partCount = 0;
     const ids: string[] = [];
     for (const it of items) {
@@ -71,7 +77,7 @@ export function enumerateChains(req: SolveRequest): OracleChain[] {
     if (leg < stations.length) {
       for (const o of orientations(stations[leg])) {
         if (!o.rear || !mates(open, o.front)) continue;
-        path.push({ part: stations[leg], role: "station", reversed: o.reversed });
+        path.push({ part: stations[leg], role: "station", reversed: o.reversed, joint: o.front!.interface });
         step(o.rear, leg + 1, count);
         path.pop();
       }
@@ -83,7 +89,7 @@ export function enumerateChains(req: SolveRequest): OracleChain[] {
       for (const o of orientations(part)) {
         if (!o.rear || !mates(open, o.front)) continue;
         used.set(i, (used.get(i) ?? 0) + 1);
-        path.push({ part, role: "connector", reversed: o.reversed });
+        path.push({ part, role: "connector", reversed: o.reversed, joint: o.front!.interface });
         step(o.rear, leg, count + 1);
         path.pop();
         used.set(i, used.get(i)! - 1);
@@ -96,14 +102,65 @@ export function enumerateChains(req: SolveRequest): OracleChain[] {
 
 const priceKey = (p: number | null) => (p === null ? Infinity : p);
 
+/** The v2 key: warned, parts, detours, |error|, price (unknown last), D. */
 export function compareSolutions(a: OracleSolution, b: OracleSolution, eps = 1e-9): number {
+  if (a.warned !== b.warned) return a.warned ? 1 : -1;
   if (a.k !== b.k) return a.k - b.k;
+  if (a.detours !== b.detours) return a.detours - b.detours;
   const ea = a.err === null ? 0 : Math.abs(a.err), eb = b.err === null ? 0 : Math.abs(b.err);
   if (Math.abs(ea - eb) > eps) return ea - eb;
   if (priceKey(a.price) !== priceKey(b.price)) return priceKey(a.price) < priceKey(b.price) ? -1 : 1;
   if (Math.abs(a.d - b.d) > eps) return a.d - b.d;
   return 0;
 }
+
+const portText = (p: Port | null) => (p ? `${p.interface}/${p.gender}` : "-");
+/** Contract v2 §3: equivalent parts share front port, rear port, lengthMm and adjustMm (absent = 0). */
+export const geometryOfPart = (p: Part) => `${portText(p.front)}>${portText(p.rear)}@${p.lengthMm}+${p.adjustMm ?? 0}`;
+
+/** Warned (vignetting or load) and detours of one ordering, with D set as the contract says. */
+function judge(req: SolveRequest, c: OracleChain, target: number | null): { d: number; warned: boolean; detours: number } {
+  // Adjustable parts take up the distance to the target in sky-to-sensor order.
+  let extra = target === null ? 0 : Math.min(Math.max(target, c.dMin), c.dMax) - c.dMin;
+  const starts: number[] = [];
+  let at = 0;
+  for (const it of c.items) {
+    const take = Math.min(it.part.adjustMm ?? 0, extra);
+    extra -= take;
+    starts.push(at);
+    at += it.part.lengthMm + take;
+  }
+  const D = at;
+  let warned = false;
+  const N = req.optics.focalRatio, s = req.camera.sensorDiagonalMm;
+  if (N !== undefined && N > 0 && s !== undefined && s >= 0) {
+    const need = (d: number) => s + d / N;
+    if (req.optics.clearApertureMm !== undefined && req.optics.clearApertureMm < need(D) - 1e-9) warned = true;
+    c.items.forEach((it, i) => {
+      if (it.part.clearApertureMm !== undefined && it.part.clearApertureMm < need(Math.max(0, D - starts[i])) - 1e-9) warned = true;
+    });
+  }
+  if (req.optics.maxLoadG !== undefined && c.items.reduce((w, it) => w + (it.part.weightG ?? 0), 0) > req.optics.maxLoadG + 1e-9) warned = true;
+  // Detours, leg by leg: a joint that leaves the previous interface for one already used in the leg.
+  let detours = 0;
+  let leg: string[] = [];
+  for (const it of c.items) {
+    if (leg.length > 0 && it.joint !== leg[leg.length - 1] && leg.includes(it.joint)) detours++;
+    leg.push(it.joint);
+    if (it.role !== "connector") leg = [];
+  }
+  return { d: D, warned, detours };
+}
+
+const contains = (big: string[], small: string[]) => {
+  const left = [...big];
+  for (const x of small) {
+    const i = left.indexOf(x);
+    if (i < 0) return false;
+    left.splice(i, 1);
+  }
+  return true;
+};
 
 export function bruteForce(req: SolveRequest): Oracle {
   const filterShift = (req.filters ?? []).reduce((s, f) => {
@@ -115,31 +172,46 @@ export function bruteForce(req: SolveRequest): Oracle {
   const tol = target === null ? null : (req.optics.backFocusToleranceMm ?? 0.5);
   const chains = enumerateChains(req);
   const base = { target, tol, filterShift, chains };
-  if (chains.length === 0) return { ...base, status: "no-connection", shortestD: null, ranked: [], nearest: null };
+  if (chains.length === 0) return { ...base, status: "no-connection", shortestD: null, ranked: [], geometries: [], nearest: null };
   const shortestD = Math.min(...chains.map((c) => c.dMin));
 
+  // Every multiset in its best ordering by the full key.
   const best = new Map<string, OracleSolution>();
   for (const c of chains) {
-    let d = c.dMin, err: number | null = null;
+    const { d, warned, detours } = judge(req, c, target);
+    let err: number | null = null;
     if (target !== null) {
-      d = Math.min(Math.max(target, c.dMin), c.dMax);
       err = d - target;
       if (Math.abs(err) > tol! + SLACK) continue;
     }
-    const s: OracleSolution = { multiset: c.multiset, k: c.partCount, err, price: c.price, d };
+    const geometry = c.items.filter((it) => it.role === "connector").map((it) => geometryOfPart(it.part)).sort().join("|");
+    const s: OracleSolution = { multiset: c.multiset, geometry, k: c.partCount, err, price: c.price, d, warned, detours };
     const prev = best.get(c.multiset);
     if (!prev || compareSolutions(s, prev) < 0) best.set(c.multiset, s);
   }
-  const ranked = [...best.values()].sort(compareSolutions);
+  let ranked = [...best.values()].sort(compareSolutions);
+  if (target === null) {
+    // No back focus, no padding: drop a multiset containing every part of a better-ranked one.
+    const parts = (m: string) => (m === "" ? [] : m.split("|"));
+    ranked = ranked.filter((b) => !ranked.some((a) => a !== b && compareSolutions(a, b) < 0 && a.k < b.k && contains(parts(b.multiset), parts(a.multiset))));
+  }
+  const byGeometry = new Map<string, OracleSolution[]>();
+  for (const s of ranked) {
+    const list = byGeometry.get(s.geometry) ?? [];
+    list.push(s);
+    byGeometry.set(s.geometry, list);
+  }
+  const geometries = [...byGeometry.values()]; // in order of each geometry's best multiset
 
-  if (target === null) return { ...base, status: "ok", shortestD, ranked, nearest: null };
+  const done = { ...base, shortestD, ranked, geometries, nearest: null };
+  if (target === null) return { ...done, status: "ok" };
   const lo = target - tol! - SLACK, hi = target + tol! + SLACK;
-  if (shortestD > hi) return { ...base, status: "too-long", shortestD, ranked, nearest: null };
-  if (ranked.length > 0) return { ...base, status: "ok", shortestD, ranked, nearest: null };
+  if (shortestD > hi) return { ...done, status: "too-long" };
+  if (ranked.length > 0) return { ...done, status: "ok" };
   const below = chains.filter((c) => c.dMax < lo).map((c) => c.dMax);
   const above = chains.filter((c) => c.dMin > hi).map((c) => c.dMin);
   return {
-    ...base, status: "out-of-reach", shortestD, ranked,
+    ...done, status: "out-of-reach",
     nearest: { belowMm: below.length ? Math.max(...below) : null, aboveMm: above.length ? Math.min(...above) : null },
   };
 }
