@@ -2,6 +2,7 @@ import "server-only";
 import { and, arrayOverlaps, asc, count, desc, eq, ilike, isNotNull, isNull, ne, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db/client";
+import { escapeLike } from "@/db/queries/like";
 import { buildAudit, buildThreads, builds, user, type BuildRow } from "@/db/schema";
 import { isModeratorRole, type BuildViewer } from "@/lib/builds/access";
 import { newBuildSlug } from "@/lib/builds/slug";
@@ -17,10 +18,6 @@ function visibleTo(viewer: BuildViewer): SQL | undefined {
   if (isModeratorRole(viewer)) return undefined;
   const open = and(ne(builds.visibility, "private"), isNull(builds.hiddenAt));
   return viewer ? or(eq(builds.ownerId, viewer.id), open) : open;
-}
-
-function escapeLike(s: string) {
-  return s.replace(/[\\%_]/g, (c) => `\\${c}`);
 }
 
 export async function insertBuild({ ownerId, values }: { ownerId: string; values: NewBuild }): Promise<string> {
@@ -63,8 +60,11 @@ export async function updateOwnBuild({ buildId, ownerId, patch }: { buildId: str
 }
 
 /** By the owner, or by an admin (whose deletion is no one's to undo: callers check the role). */
-export async function deleteBuild({ buildId, ownerId }: { buildId: string; ownerId: string | "any-owner" }) {
-  const where = ownerId === "any-owner" ? eq(builds.id, buildId) : and(eq(builds.id, buildId), eq(builds.ownerId, ownerId));
+/** Passed as `ownerId` when an admin deletes someone else's build: no owner condition. */
+export const ANY_OWNER = Symbol("any owner");
+
+export async function deleteBuild({ buildId, ownerId }: { buildId: string; ownerId: string | typeof ANY_OWNER }) {
+  const where = ownerId === ANY_OWNER ? eq(builds.id, buildId) : and(eq(builds.id, buildId), eq(builds.ownerId, ownerId));
   const rows = await db.delete(builds).where(where).returning({ id: builds.id });
   if (!rows.length) throw new AppError("not_found:build", "No build of yours at this link.");
 }

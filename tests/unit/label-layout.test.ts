@@ -34,7 +34,10 @@ describe("layoutCallouts", () => {
       fc.array(fc.record({ gap: fc.double({ min: MIN_LEADER_GAP, max: 300, noNaN: true }), width: fc.double({ min: 20, max: 160, noNaN: true }) }), { minLength: 1, maxLength: 14 }),
       (raw) => {
         let x = 20;
-        const labels = raw.map((r) => ({ cx: (x += r.gap), width: r.width }));
+        const labels = raw.map((r) => {
+          x += r.gap;
+          return { cx: x, width: r.width };
+        });
         expect(collisions(labels, layoutCallouts(labels, 0, Infinity))).toEqual([]);
       }), { numRuns: 400 });
   });

@@ -1,7 +1,8 @@
 // POST /api/v1/quotes/[id]/cancel — the buyer withdraws a request or quote, or the shop declines it
 import { getQuoteForViewerOrThrow, listShopMemberEmails } from "@/db/queries/orders";
 import { cancelQuote } from "@/db/queries/orders-write";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { orderMail } from "@/lib/payments/mail";
 import { cancelQuoteSchema } from "@/lib/validation/orders";
 
