@@ -7,6 +7,7 @@ import { buildAudit, buildThreads, builds, user, type BuildRow } from "@/db/sche
 import { isModeratorRole, type BuildViewer } from "@/lib/builds/access";
 import { newBuildSlug } from "@/lib/builds/slug";
 import { AppError } from "@/lib/errors";
+import { packCursor } from "@/lib/validation/cursor";
 import { buildSlugSchema, decodeBuildCursor, MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
 
 export type NewBuild = Pick<BuildRow, "title" | "notes" | "visibility" | "request" | "solutionIndex" | "result" | "partIds" | "checkedCatalogVersion">;
@@ -147,7 +148,7 @@ export async function listBuilds({ query, ownerId }: { query: ListBuildsQuery; o
     .where(and(...where)).orderBy(desc(endorsedSql), desc(builds.createdAt), desc(builds.id)).limit(query.limit + 1);
   const page = rows.slice(0, query.limit);
   const last = page[page.length - 1];
-  return { items: page, nextCursor: rows.length > query.limit && last ? Buffer.from(last.position).toString("base64url") : null };
+  return { items: page, nextCursor: rows.length > query.limit && last ? packCursor(last.position) : null };
 }
 
 /** The moderators' queue: endorsed builds that stopped fitting first, then the newest that others can see. */
