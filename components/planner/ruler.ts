@@ -1,4 +1,6 @@
 // Tick spacing for a ruler in millimetres or inches: major ticks at least `minPx` apart.
+// Hand-written, not d3-scale's ticks: those step in 1-2-5 only and aim at a tick count, while a
+// ruler here also steps 25 mm / 0.25 in and chooses by the pixels between ticks.
 import type { LengthUnit } from "@/lib/units";
 import { MM_PER_INCH } from "@/lib/optics";
 
