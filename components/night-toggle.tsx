@@ -8,6 +8,7 @@ export function NightToggle({ initial }: { initial: boolean }) {
     const next = !night;
     setNight(next);
     document.documentElement.dataset.theme = next ? "night" : "day";
+    // biome-ignore lint/suspicious/noDocumentCookie: the Cookie Store API is missing from some browsers we serve; one plain cookie
     document.cookie = `ty-theme=${next ? "night" : "day"}; path=/; max-age=31536000; samesite=lax`;
   }
   return (

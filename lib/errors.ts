@@ -75,7 +75,7 @@ function collect(issues: readonly Issue[], prefix: readonly PropertyKey[], out: 
       if (best.length) { collect(best, path, out); continue; }
     }
     const key = path.length ? path.map(String).join(".") : "_root";
-    (out[key] ??= []).push(issue.message);
+    out[key] = [...(out[key] ?? []), issue.message];
   }
 }
 

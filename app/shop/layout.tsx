@@ -41,7 +41,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
                 <select id="shop-switch" name="to" defaultValue={shop.slug} className="min-w-0 flex-1 rounded-md border border-line bg-bg px-2 py-1 text-sm">
                   {shops.map((s) => <option key={s.slug} value={s.slug}>{s.name}</option>)}
                 </select>
-                <button className="rounded-md border border-line px-2 text-sm hover:border-brass">Go</button>
+                <button type="submit" className="rounded-md border border-line px-2 text-sm hover:border-brass">Go</button>
               </div>
             </form>
           ) : null}

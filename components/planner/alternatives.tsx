@@ -6,6 +6,7 @@ import { formatPrice } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { signed } from "./train-model";
+import { MM_PER_INCH } from "@/lib/optics";
 
 function connectors(chain: Chain, names: (id: string) => string): string {
   const counts = new Map<string, number>();
@@ -61,7 +62,7 @@ export function Alternatives({ solutions, chosen, onChoose, names, unit, currenc
             </span>
             <span className="num mt-0.5 block text-text">
               {formatLength(c.sensorDistanceMm, unit)}
-              {c.errorMm !== null ? <span className="text-muted"> ({signed(unit === "in" ? c.errorMm / 25.4 : c.errorMm, unit === "in" ? 3 : 2)} {unit})</span> : null}
+              {c.errorMm !== null ? <span className="text-muted"> ({signed(unit === "in" ? c.errorMm / MM_PER_INCH : c.errorMm, unit === "in" ? 3 : 2)} {unit})</span> : null}
               {c.warnings.length ? <span className="ml-2 text-warn">▲ {c.warnings.length} warning{c.warnings.length === 1 ? "" : "s"}</span> : null}
             </span>
             <span className="mt-1 block text-xs text-muted">{connectors(c, names)}</span>

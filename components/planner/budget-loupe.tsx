@@ -7,6 +7,7 @@ import type { LengthUnit } from "@/lib/units";
 import { tickLabel, ticks } from "./ruler";
 import { signed } from "./train-model";
 import { useWidth } from "./use-width";
+import { MM_PER_INCH } from "@/lib/optics";
 
 type Range = { sensorMm: number; targetMm: number; toleranceMm: number; filterShiftMm: number; nearest?: Nearest | null };
 type Props = Range & { steps: Step[]; unit: LengthUnit; hatch: string; inside: boolean };
@@ -32,7 +33,7 @@ export function BudgetLoupe({ steps, sensorMm, targetMm: T, toleranceMm: tol, fi
   const t = ticks(lo, hi, px, unit, 64);
   const mark = inside ? "var(--c-ok)" : "var(--c-bad)";
   const off = sensorMm < lo ? -1 : sensorMm > hi ? 1 : 0;
-  const u = (mm: number) => (unit === "in" ? mm / 25.4 : mm);
+  const u = (mm: number) => (unit === "in" ? mm / MM_PER_INCH : mm);
   const d = unit === "in" ? 3 : 2;
   const err = sensorMm - T;
   const sx = x(sensorMm);

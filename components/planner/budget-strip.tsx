@@ -10,6 +10,7 @@ import { SEGMENT_FILL } from "./segment-fill";
 import { tickLabel, ticks } from "./ruler";
 import { signed } from "./train-model";
 import { useWidth } from "./use-width";
+import { MM_PER_INCH } from "@/lib/optics";
 
 type Props = {
   chain: Chain;
@@ -36,12 +37,12 @@ export function BudgetStrip({ chain, names, targetMm, toleranceMm, filterShiftMm
   const mark = inside ? "var(--c-ok)" : "var(--c-bad)";
   const t = ticks(0, maxMm, px, unit);
   const clampX = (v: number, half: number) => Math.min(W - half - 2, Math.max(half + 2, v));
-  const short = (mm: number) => unit === "in" ? (mm / 25.4).toFixed(2) : mm.toFixed(1);
-  const errText = chain.errorMm === null ? "" : ` · ${signed(unit === "in" ? chain.errorMm / 25.4 : chain.errorMm, unit === "in" ? 3 : 2)} ${unit}`;
+  const short = (mm: number) => unit === "in" ? (mm / MM_PER_INCH).toFixed(2) : mm.toFixed(1);
+  const errText = chain.errorMm === null ? "" : ` · ${signed(unit === "in" ? chain.errorMm / MM_PER_INCH : chain.errorMm, unit === "in" ? 3 : 2)} ${unit}`;
   const sensorText = `sensor ${unit === "in" ? formatLength(D, "in") : `${D.toFixed(2)} mm`}${errText}`;
   const B = targetMm !== null ? targetMm - filterShiftMm : null;
   const targetText = targetMm !== null
-    ? `target ${unit === "in" ? (targetMm / 25.4).toFixed(3) : targetMm.toFixed(2)} ± ${unit === "in" ? (tol / 25.4).toFixed(3) : tol.toFixed(2)}`
+    ? `target ${unit === "in" ? (targetMm / MM_PER_INCH).toFixed(3) : targetMm.toFixed(2)} ± ${unit === "in" ? (tol / MM_PER_INCH).toFixed(3) : tol.toFixed(2)}`
     : "";
   const H = 150;
   const loupe = targetMm !== null && toleranceMm !== null ? loupeRange({ sensorMm: D, targetMm, toleranceMm, filterShiftMm, nearest }) : null;

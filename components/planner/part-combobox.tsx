@@ -120,6 +120,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
         aria-activedescendant={open && activeIndex >= 0 && options[activeIndex] ? optionId(activeIndex) : undefined}
         aria-describedby={hint ? `${id}-hint` : undefined}
         autoComplete="off"
+        // biome-ignore lint/a11y/noAutofocus: only when the caller opens the picker on purpose (the "change" button), so focus follows the press
         autoFocus={autoFocus}
         className={inputClass}
         placeholder={placeholder ?? "Type a maker, model or thread…"}
@@ -133,11 +134,14 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
       {hint ? <p id={`${id}-hint`} className="mt-1 text-xs text-muted">{hint}</p> : null}
       {open ? (
         <div className="absolute left-0 right-0 z-30 mt-1 lg:right-auto lg:w-[26rem] overflow-hidden rounded-md border border-line bg-surface shadow-lg shadow-black/10">
+          {/* biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: the ARIA 1.2 combobox pattern: a ul listbox driven from the input */}
           <ul id={listId} role="listbox" aria-label={label} tabIndex={-1} className="max-h-72 overflow-y-auto py-1">
             {options.map((p, i) => (
+              // biome-ignore lint/a11y/useFocusableInteractive: the active option is announced through aria-activedescendant; focus stays in the input
               <li
                 key={p.slug}
                 id={optionId(i)}
+                // biome-ignore lint/a11y/noNoninteractiveElementToInteractiveRole: an option of the listbox above
                 role="option"
                 aria-selected={i === activeIndex}
                 onMouseDown={(e) => { e.preventDefault(); pick(p); }}

@@ -67,6 +67,7 @@ export function TrainDiagram({ train, unit, label, warnings }: { train: Train; u
   // Controlled, so a new train or a new width re-frames it while the reader can still pan.
   const [viewport, setViewport] = useState<Viewport>(fitted.viewport);
   const { x, y, zoom } = fitted.viewport;
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the train's signature is the trigger: a new train re-frames even at the same fit
   useEffect(() => setViewport({ x, y, zoom }), [signature, x, y, zoom]);
   const overflow = fitted.overflow;
   return (

@@ -1,8 +1,7 @@
 // Pure helpers that turn an answer of POST /api/v1/solve into what the planner draws.
-import type { Chain, Step } from "@/lib/solver";
+import type { Chain, Gender, Step } from "@/lib/solver";
 import type { PlanItem, PlanResponse } from "@/lib/planner/api-types";
 
-type Gender = "male" | "female";
 type Port = { interface: string; gender: Gender } | null;
 
 export type TrainRole = "telescope" | "optics" | "connector" | "station" | "camera";

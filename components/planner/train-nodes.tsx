@@ -38,7 +38,7 @@ function box(data: TrainNodeData) {
 /** A warned item carries a small amber mark whose title says why. */
 function Mark({ data }: { data: TrainNodeData }) {
   if (!data.warning) return null;
-  return <span title={data.warning} aria-label={`Warning: ${data.warning}`} className="absolute -right-2 -top-3 z-10 rounded-full bg-warn px-1.5 text-[10px] font-bold leading-4 text-bg">▲</span>;
+  return <span role="img" title={data.warning} aria-label={`Warning: ${data.warning}`} className="absolute -right-2 -top-3 z-10 rounded-full bg-warn px-1.5 text-[10px] font-bold leading-4 text-bg">▲</span>;
 }
 
 function OpticNode({ data }: NodeProps<TrainNode>) {

@@ -6,6 +6,7 @@ import { formatPrice } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 import type { LengthUnit } from "@/lib/units";
 import { isInside, signed } from "./train-model";
+import { MM_PER_INCH } from "@/lib/optics";
 
 const STATUS = {
   "ok": { label: "Reaches focus", tone: "text-ok border-ok/50 bg-ok/10" },
@@ -15,7 +16,7 @@ const STATUS = {
 } as const;
 
 function Big({ mm, unit, digits = 2 }: { mm: number; unit: LengthUnit; digits?: number }) {
-  const v = unit === "in" ? (mm / 25.4).toFixed(digits + 1) : mm.toFixed(digits);
+  const v = unit === "in" ? (mm / MM_PER_INCH).toFixed(digits + 1) : mm.toFixed(digits);
   return <><strong className="num text-[1.35em] font-semibold tracking-tight text-ink">{v}</strong><span className="text-muted"> {unit}</span></>;
 }
 
@@ -25,7 +26,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
   const s = STATUS[result.status];
   const T = result.targetMm, tol = result.toleranceMm;
   const inside = result.status === "ok" && isInside(chain, tol);
-  const tolText = tol === null ? "" : unit === "in" ? (tol / 25.4).toFixed(3) : tol.toFixed(2);
+  const tolText = tol === null ? "" : unit === "in" ? (tol / MM_PER_INCH).toFixed(3) : tol.toFixed(2);
   const err = chain?.errorMm;
   const toBuy = chain?.priceCents;
   return (
@@ -52,9 +53,9 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
         ) : result.status === "out-of-reach" && T !== null && result.nearest ? (
           <>
             Closest reachable{" "}
-            {result.nearest.belowMm !== null ? <><Big mm={result.nearest.belowMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.belowMm - T) / 25.4 : result.nearest.belowMm - T, unit === "in" ? 3 : 2)})</span></> : null}
+            {result.nearest.belowMm !== null ? <><Big mm={result.nearest.belowMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.belowMm - T) / MM_PER_INCH : result.nearest.belowMm - T, unit === "in" ? 3 : 2)})</span></> : null}
             {result.nearest.belowMm !== null && result.nearest.aboveMm !== null ? " and " : null}
-            {result.nearest.aboveMm !== null ? <><Big mm={result.nearest.aboveMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.aboveMm - T) / 25.4 : result.nearest.aboveMm - T, unit === "in" ? 3 : 2)})</span></> : null}
+            {result.nearest.aboveMm !== null ? <><Big mm={result.nearest.aboveMm} unit={unit} /> <span className="num text-base text-muted">({signed(unit === "in" ? (result.nearest.aboveMm - T) / MM_PER_INCH : result.nearest.aboveMm - T, unit === "in" ? 3 : 2)})</span></> : null}
             {" "}<span className="text-muted">—</span> target <Big mm={T} unit={unit} /><span className="num text-muted"> ± {tolText}</span>{" "}
             <span className="text-muted">—</span> <span className="font-semibold text-bad">nothing lands in the window</span>
           </>
@@ -65,7 +66,7 @@ export function Verdict({ result, chain, index, unit, onUnit }: {
             <span className={inside ? "font-semibold text-ok" : "font-semibold text-bad"}>
               {inside ? "inside the window" : result.status === "too-long" ? "too long even at its shortest" : "outside the window"}
             </span>
-            {err !== null && err !== undefined ? <span className="num text-base text-muted"> ({signed(unit === "in" ? err / 25.4 : err, unit === "in" ? 3 : 2)} {unit})</span> : null}
+            {err !== null && err !== undefined ? <span className="num text-base text-muted"> ({signed(unit === "in" ? err / MM_PER_INCH : err, unit === "in" ? 3 : 2)} {unit})</span> : null}
           </>
         ) : chain ? (
           <>Connected: sensor <Big mm={chain.sensorDistanceMm} unit={unit} digits={1} /> behind the focuser&apos;s joint <span className="text-base text-muted">— this optic sets no back focus, so the focuser takes up the rest.</span></>

@@ -51,6 +51,7 @@ export function InventoryTable({ shopSlug, currency, initial }: { shopSlug: stri
   };
 
   const h = createColumnHelper<Row>();
+  // biome-ignore lint/correctness/useExhaustiveDependencies: cells read the latest state through closures; rebuilt only when checks or server errors change
   const columns = useMemo(() => [
     h.accessor((r) => `${r.maker} ${r.model}`, {
       id: "part", header: "Catalog part",
@@ -91,7 +92,6 @@ export function InventoryTable({ shopSlug, currency, initial }: { shopSlug: stri
           onClick={() => { setRows((rs) => rs.filter((x) => x.slug !== r.slug)); if (!r.isNew) setRemoved((d) => [...d, r.slug]); }}>Remove</button>
       ),
     }),
-  // eslint-disable-next-line react-hooks/exhaustive-deps -- cells read the latest state through closures
   ], [checks, serverErrors]);
 
   const shown = useMemo(() => {

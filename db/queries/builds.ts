@@ -2,10 +2,12 @@ import "server-only";
 import { and, arrayOverlaps, asc, count, desc, eq, ilike, isNotNull, isNull, ne, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { db } from "@/db/client";
+import { escapeLike } from "@/db/queries/like";
 import { buildAudit, buildThreads, builds, user, type BuildRow } from "@/db/schema";
 import { isModeratorRole, type BuildViewer } from "@/lib/builds/access";
 import { newBuildSlug } from "@/lib/builds/slug";
 import { AppError } from "@/lib/errors";
+import { packCursor } from "@/lib/validation/cursor";
 import { buildSlugSchema, decodeBuildCursor, MAX_THREADS_PER_BUILD, type ListBuildsQuery, type UpdateBuildInput } from "@/lib/validation/builds";
 
 export type NewBuild = Pick<BuildRow, "title" | "notes" | "visibility" | "request" | "solutionIndex" | "result" | "partIds" | "checkedCatalogVersion">;
@@ -17,10 +19,6 @@ function visibleTo(viewer: BuildViewer): SQL | undefined {
   if (isModeratorRole(viewer)) return undefined;
   const open = and(ne(builds.visibility, "private"), isNull(builds.hiddenAt));
   return viewer ? or(eq(builds.ownerId, viewer.id), open) : open;
-}
-
-function escapeLike(s: string) {
-  return s.replace(/[\\%_]/g, (c) => `\\${c}`);
 }
 
 export async function insertBuild({ ownerId, values }: { ownerId: string; values: NewBuild }): Promise<string> {
@@ -63,8 +61,11 @@ export async function updateOwnBuild({ buildId, ownerId, patch }: { buildId: str
 }
 
 /** By the owner, or by an admin (whose deletion is no one's to undo: callers check the role). */
-export async function deleteBuild({ buildId, ownerId }: { buildId: string; ownerId: string | "any-owner" }) {
-  const where = ownerId === "any-owner" ? eq(builds.id, buildId) : and(eq(builds.id, buildId), eq(builds.ownerId, ownerId));
+/** Passed as `ownerId` when an admin deletes someone else's build: no owner condition. */
+export const ANY_OWNER = Symbol("any owner");
+
+export async function deleteBuild({ buildId, ownerId }: { buildId: string; ownerId: string | typeof ANY_OWNER }) {
+  const where = ownerId === ANY_OWNER ? eq(builds.id, buildId) : and(eq(builds.id, buildId), eq(builds.ownerId, ownerId));
   const rows = await db.delete(builds).where(where).returning({ id: builds.id });
   if (!rows.length) throw new AppError("not_found:build", "No build of yours at this link.");
 }
@@ -147,7 +148,7 @@ export async function listBuilds({ query, ownerId }: { query: ListBuildsQuery; o
     .where(and(...where)).orderBy(desc(endorsedSql), desc(builds.createdAt), desc(builds.id)).limit(query.limit + 1);
   const page = rows.slice(0, query.limit);
   const last = page[page.length - 1];
-  return { items: page, nextCursor: rows.length > query.limit && last ? Buffer.from(last.position).toString("base64url") : null };
+  return { items: page, nextCursor: rows.length > query.limit && last ? packCursor(last.position) : null };
 }
 
 /** The moderators' queue: endorsed builds that stopped fitting first, then the newest that others can see. */

@@ -1,12 +1,11 @@
 import "server-only";
 import { and, eq, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
+import { escapeLike } from "@/db/queries/like";
 import { parts } from "@/db/schema";
 import { nameCompactSql, searchCompactSql, searchWordsSql } from "@/db/search-sql";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import type { ParsedSearch } from "@/lib/search/normalize";
-
-const escapeLike = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** The query as a prefix tsquery: words AND-ed, a synonym's spellings OR-ed, phrases in order. */
 export function toTsQuery(search: ParsedSearch): string {

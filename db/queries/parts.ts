@@ -36,11 +36,6 @@ export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
   };
 }
 
-export async function countApprovedParts() {
-  const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(parts).where(eq(parts.status, "approved"));
-  return row.n;
-}
-
 /** By id or slug; pending and rejected parts only for their submitter or a moderator. */
 export async function getPartOrThrow({ ref, viewer }: { ref: string; viewer?: { id: string; moderator: boolean } | null }) {
   if (hasNul(ref) || ref.length > 200) throw new AppError("not_found:part", "No such part in the catalog.");

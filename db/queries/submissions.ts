@@ -1,4 +1,5 @@
 import "server-only";
+import { packCursor, unpackCursor } from "@/lib/validation/cursor";
 import { and, asc, count, desc, eq, gt, gte, ilike, lt, ne, or } from "drizzle-orm";
 import { db } from "@/db/client";
 import { parts, user } from "@/db/schema";
@@ -36,11 +37,11 @@ type Page = { limit: number; cursor?: string };
 // Keyset paging on (created_at, id): the cursor is the last row's pair, base64url-encoded.
 function decodeCursor(cursor: string | undefined): { at: Date; id: string } | null {
   if (!cursor) return null;
-  const [at, id] = Buffer.from(cursor, "base64url").toString("utf8").split("|");
-  if (!id || Number.isNaN(Date.parse(at)) || id.includes("\u0000")) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
+  const [at, id, extra] = unpackCursor(cursor);
+  if (!id || extra !== undefined || Number.isNaN(Date.parse(at)) || id.includes("\u0000")) throw new AppError("bad_request:validation", "Not a cursor from this API.", { cursor: ["Not a cursor from this API"] });
   return { at: new Date(at), id };
 }
-const encodeCursor = (row: { createdAt: Date; id: string }) => Buffer.from(`${row.createdAt.toISOString()}|${row.id}`).toString("base64url");
+const encodeCursor = (row: { createdAt: Date; id: string }) => packCursor(row.createdAt.toISOString(), row.id);
 
 function pageOf<T>(rows: T[], limit: number, key: (r: T) => { createdAt: Date; id: string }) {
   const items = rows.slice(0, limit);

@@ -19,7 +19,6 @@ export const siteRoles = {
   admin: siteAc.newRole({ ...adminAc.statements, build: ["save", "moderate", "delete-any"], part: ["submit", "review"] }),
 };
 export type SiteRole = keyof typeof siteRoles;
-export const SITE_ROLES = Object.keys(siteRoles) as SiteRole[];
 
 /** One permission: a resource and one of its actions, e.g. `{ build: "moderate" }`. */
 type OneOf<S> = { [K in keyof S]: { [P in K]: S[K] extends readonly (infer A)[] ? A : never } }[keyof S];

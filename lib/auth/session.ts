@@ -1,8 +1,6 @@
 import "server-only";
 import { headers } from "next/headers";
-import type { z } from "zod";
-import { AppError, fieldErrorsOf, toErrorResponse } from "@/lib/errors";
-import { readJsonBody, refuseNul } from "@/lib/http/body";
+import { AppError, toErrorResponse } from "@/lib/errors";
 import { assertTrustedOrigin } from "@/lib/http/origin";
 import { consumeLimit, type LimitName } from "@/lib/http/rate-limit";
 import { getAuth } from "./index";
@@ -48,7 +46,7 @@ export function withSession<P = Record<string, string>>(
   handler: Handler<P, SessionUser | null>, opts: { anonymous: true; limit?: LimitName },
 ): (request: Request, ctx: RouteContext<P>) => Promise<Response>;
 export function withSession<P>(
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- narrowed by the overloads above
+  // biome-ignore lint/suspicious/noExplicitAny: the implementation signature; the overloads above narrow it
   handler: Handler<P, any>, opts: { permission?: SitePermission; anonymous?: boolean; limit?: LimitName } = {},
 ) {
   return async (request: Request, ctx: RouteContext<P>) => {
@@ -62,47 +60,6 @@ export function withSession<P>(
       return await handler(request, { user, params });
     } catch (err) {
       return toErrorResponse(err);
-    }
-  };
-}
-
-export { readJsonBody };
-
-/** Parse a JSON body with a zod schema: 415 unless JSON, 413 past `maxBytes`, 400 with field errors when it does not fit. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 1_000_000): Promise<z.output<S>> {
-  return parseWith(schema, await readJsonBody(request, maxBytes));
-}
-
-export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.output<S> {
-  refuseNul(raw);
-  const parsed = schema.safeParse(raw);
-  if (!parsed.success) throw new AppError("bad_request:validation", "Some fields need attention.", fieldErrorsOf(parsed.error.issues));
-  return parsed.data;
-}
-
-export type ActionState<T = unknown> =
-  | { ok: true; data: T; message?: string }
-  | { ok: false; message: string; fieldErrors?: Record<string, string[]> }
-  | null;
-
-/**
- * The one wrapper for server actions: session + role + zod, and errors as typed form state.
- * Never echoes submitted values (passwords stay out of state).
- */
-export function withAction<S extends z.ZodType, T>(
-  schema: S,
-  action: (input: z.output<S>, user: SessionUser) => Promise<T>,
-  opts: { permission?: SitePermission } = {},
-) {
-  return async (input: unknown): Promise<ActionState<T>> => {
-    try {
-      const user = requireUser(await getSessionUser(), opts.permission);
-      const data = await action(parseWith(schema, input), user);
-      return { ok: true, data };
-    } catch (err) {
-      if (err instanceof AppError) return { ok: false, message: err.message, fieldErrors: err.fields };
-      console.error(err);
-      return { ok: false, message: "Something went wrong on our side. Please try again." };
     }
   };
 }

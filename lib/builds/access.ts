@@ -9,12 +9,6 @@ type BuildLike = { ownerId: string; visibility: string; hiddenAt: Date | null };
 export const isModeratorRole = (viewer: BuildViewer) => !!viewer && can(viewer.role, { build: "moderate" });
 export const isOwner = (build: BuildLike, viewer: BuildViewer) => !!viewer && viewer.id === build.ownerId;
 
-/** Private builds: the owner and moderators. Hidden builds: the same. Others: anyone with the link. */
-export function canViewBuild(build: BuildLike, viewer: BuildViewer): boolean {
-  if (isOwner(build, viewer) || isModeratorRole(viewer)) return true;
-  return build.visibility !== "private" && !build.hiddenAt;
-}
-
 /** The owner edits and deletes; an admin may also delete. */
 export function canDeleteBuild(build: BuildLike, viewer: BuildViewer): boolean {
   return isOwner(build, viewer) || (!!viewer && can(viewer.role, { build: "delete-any" }));

@@ -24,9 +24,9 @@ export function collectPartIds(result: PlanResponse, chain: Chain): string[] {
   add(ctx.opticsId);
   add(ctx.telescopeId);
   add(ctx.cameraId);
-  ctx.stationIds.forEach(add);
-  chain.steps.forEach((s) => add(s.partId));
-  chosenTelescopeLink(result)?.steps.forEach((s) => { if (s.role === "connector") add(s.partId); });
+  for (const id of ctx.stationIds) add(id);
+  for (const s of chain.steps) add(s.partId);
+  for (const s of chosenTelescopeLink(result)?.steps ?? []) if (s.role === "connector") add(s.partId);
   return [...ids].sort();
 }
 

@@ -71,7 +71,7 @@ function staircase(labels: Callout[], minX: number, maxX: number): Placed[] {
     const left = Math.max(minX, l.cx - l.width + LEADER_MARGIN * 2);
     return { row, left, right: left + l.width };
   });
-  const valid = endingAt.every((p, i) => endingAt.every((q, j) => !(j > i && labels[j].cx > p.left - LEADER_MARGIN && labels[j].cx < p.right + LEADER_MARGIN)));
+  const valid = endingAt.every((p, i) => labels.every((later, j) => !(j > i && later.cx > p.left - LEADER_MARGIN && later.cx < p.right + LEADER_MARGIN)));
   if (valid) return endingAt;
   return labels.map((l, i) => {
     const left = Math.max(minX, Math.min(l.cx - LEADER_MARGIN * 2, maxX - l.width));

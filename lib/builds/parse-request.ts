@@ -1,9 +1,9 @@
 // A saved build's `request` is the body of POST /api/v1/solve: validate it with the same schemas.
 import { AppError, fieldErrorsOf } from "@/lib/errors";
+import { isPartRef as isRef } from "@/lib/planner/part-ref";
 import type { PlanInput } from "@/lib/planner/run-plan";
 import { parsePlanRequest } from "@/lib/validation/plan";
 
-const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in v;
 
 /**
  * Parse a solve request for saving as a build. Field errors are prefixed with `prefix`

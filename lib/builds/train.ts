@@ -1,9 +1,8 @@
 // A saved build as a drawable train: items sky to sensor and the joints between them. Pure.
 import type { PlanResponse } from "@/lib/planner/api-types";
-import type { Chain } from "@/lib/solver/types";
+import type { Chain, Gender } from "@/lib/solver/types";
 import { chosenTelescopeLink, itemOf } from "./chain";
 
-type Gender = "male" | "female";
 type Port = { interface: string; gender: Gender } | null;
 
 export type TrainRole = "telescope" | "optics" | "connector" | "station" | "camera";

@@ -1,6 +1,7 @@
 // Mapping between the catalog's validated shape and its table row, and to the solver's Part.
 import type { PartParsed, PartSpecs } from "@/lib/validation/parts";
 import { sensorDiagonalMm } from "@/lib/validation/parts";
+import type { Gender } from "@/lib/solver/types";
 
 export type PartRowLike = {
   id: string; slug: string; kind: string; maker: string; model: string; description: string | null;
@@ -20,7 +21,6 @@ export function partToRow(p: PartParsed) {
   };
 }
 
-export type Gender = "male" | "female";
 export type PortOut = { interface: string; gender: Gender } | null;
 
 function port(i: string | null, g: string | null): PortOut {

@@ -17,7 +17,7 @@ if (!url) {
 try {
   const file = backupDatabase({ url, dir: path.join(root, ".data", "backups") });
   console.log(`Backup written: ${path.relative(process.cwd(), file)}`);
-  console.log("Restore it with: npm run db:restore " + path.relative(process.cwd(), file));
+  console.log(`Restore it with: npm run db:restore ${path.relative(process.cwd(), file)}`);
 } catch (err) {
   console.error((err as Error).message);
   process.exitCode = 1;

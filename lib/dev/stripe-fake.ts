@@ -135,19 +135,25 @@ export async function startStripeFake(opts: { port: number; webhookUrl: string; 
   }
 
   async function api(method: string, path: string, body: Obj, query: URLSearchParams): Promise<unknown> {
-    let m: RegExpMatchArray | null;
+    // The id captured from a path of this shape, if the path has it.
+    const idIn = (shape: RegExp) => path.match(shape)?.[1];
+    let m: string | undefined;
     if (method === "POST" && path === "/v1/checkout/sessions") return createSession(body);
-    if (method === "GET" && (m = path.match(/^\/v1\/checkout\/sessions\/([\w-]+)$/))) return sessionOrThrow(m[1]);
-    if (method === "GET" && (m = path.match(/^\/v1\/checkout\/sessions\/([\w-]+)\/line_items$/))) {
-      sessionOrThrow(m[1]);
-      const data = lineItems.get(m[1])!.map((li, i) => ({ id: `li_${i}`, object: "item", description: li.name, quantity: li.quantity, amount_total: li.unitAmount * li.quantity, currency: li.currency }));
+    m = idIn(/^\/v1\/checkout\/sessions\/([\w-]+)$/);
+    if (method === "GET" && m) return sessionOrThrow(m);
+    m = idIn(/^\/v1\/checkout\/sessions\/([\w-]+)\/line_items$/);
+    if (method === "GET" && m) {
+      sessionOrThrow(m);
+      const data = lineItems.get(m)!.map((li, i) => ({ id: `li_${i}`, object: "item", description: li.name, quantity: li.quantity, amount_total: li.unitAmount * li.quantity, currency: li.currency }));
       return { object: "list", data, has_more: false, url: path };
     }
-    if (method === "POST" && (m = path.match(/^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/))) { const s = sessionOrThrow(m[1]); await expire(s); return s; }
+    m = idIn(/^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/);
+    if (method === "POST" && m) { const s = sessionOrThrow(m); await expire(s); return s; }
     if (method === "POST" && path === "/v1/refunds") return refund(body);
-    if (method === "GET" && (m = path.match(/^\/v1\/refunds\/([\w-]+)$/))) {
-      const r = refunds.get(m[1]);
-      if (!r) throw new FakeError(404, `No such refund: '${m[1]}'`, "resource_missing");
+    m = idIn(/^\/v1\/refunds\/([\w-]+)$/);
+    if (method === "GET" && m) {
+      const r = refunds.get(m);
+      if (!r) throw new FakeError(404, `No such refund: '${m}'`, "resource_missing");
       return r;
     }
     if (method === "GET" && path === "/v1/events") {
@@ -156,9 +162,10 @@ export async function startStripeFake(opts: { port: number; webhookUrl: string; 
       const data = events.filter((e) => !type || e.type === type).slice(0, limit);
       return { object: "list", data, has_more: false, url: path };
     }
-    if (method === "GET" && (m = path.match(/^\/v1\/events\/([\w-]+)$/))) {
-      const e = events.find((x) => x.id === m![1]);
-      if (!e) throw new FakeError(404, `No such event: '${m[1]}'`, "resource_missing");
+    const eventId = idIn(/^\/v1\/events\/([\w-]+)$/);
+    if (method === "GET" && eventId) {
+      const e = events.find((x) => x.id === eventId);
+      if (!e) throw new FakeError(404, `No such event: '${eventId}'`, "resource_missing");
       return e;
     }
     throw new FakeError(404, `Unrecognized request URL (${method}: ${path}). The local fake implements only what Trainyard uses.`);

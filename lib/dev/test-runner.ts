@@ -37,10 +37,13 @@ async function vitest(projects: string[], env: NodeJS.ProcessEnv, extra: string[
 }
 
 const args = process.argv.slice(2);
+console.log("[lint] biome lint --error-on-warnings");
+const lint = spawnSync(path.join(root, "node_modules", ".bin", "biome"), ["lint", "--error-on-warnings", "."], { cwd: root, stdio: "inherit" });
+if (lint.status !== 0) totals.failed += 1;
 console.log("[typecheck] tsc --noEmit");
 const tsc = spawnSync(process.execPath, [path.join(root, "node_modules", "typescript", "bin", "tsc"), "--noEmit", "-p", "tsconfig.json"], { cwd: root, stdio: "inherit" });
 if (tsc.status !== 0) totals.failed += 1;
-let status = tsc.status ?? 1;
+let status = (lint.status ?? 1) || (tsc.status ?? 1);
 status = (await vitest(["unit"], process.env, args)) || status;
 
 if (!process.env.TRAINYARD_UNIT_ONLY) {
@@ -66,7 +69,7 @@ if (!process.env.TRAINYARD_UNIT_ONLY) {
     const s = await vitest(projects, testEnv, args);
     if (s !== 0) {
       status = status || s;
-      console.log("\n── app server log (last 4000 characters) ──\n" + appLog.slice(-4000));
+      console.log(`\n── app server log (last 4000 characters) ──\n${appLog.slice(-4000)}`);
     }
   } catch (err) {
     console.error(err);

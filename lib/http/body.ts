@@ -1,6 +1,7 @@
 // Reading request bodies: the stream is read only up to the limit, then abandoned (413),
 // whether or not the client sent a Content-Length.
-import { AppError } from "@/lib/errors";
+import type { z } from "zod";
+import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { findNul, NUL_MESSAGE } from "@/lib/validation/nul";
 
 const tooLarge = (maxBytes: number) =>
@@ -57,3 +58,17 @@ export function refuseNul(raw: unknown): void {
   const at = findNul(raw);
   if (at) throw new AppError("bad_request:validation", "Some fields need attention.", { [at]: [NUL_MESSAGE] });
 }
+
+/** Parse a JSON body with a zod schema: 415 unless JSON, 413 past `maxBytes`, 400 with field errors when it does not fit. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = 1_000_000): Promise<z.output<S>> {
+  return parseWith(schema, await readJsonBody(request, maxBytes));
+}
+
+/** Validate an already-read value the same way: NUL refused, 400 with field errors. */
+export function parseWith<S extends z.ZodType>(schema: S, raw: unknown): z.output<S> {
+  refuseNul(raw);
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw new AppError("bad_request:validation", "Some fields need attention.", fieldErrorsOf(parsed.error.issues));
+  return parsed.data;
+}
+

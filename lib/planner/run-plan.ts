@@ -10,19 +10,18 @@ import { AppError } from "@/lib/errors";
 import { solveTrain, type Camera, type Optics, type Part, type SolveRequest, type SolveResult } from "@/lib/solver";
 import { shopStockSource } from "@/lib/shops/stock-source";
 import type { PlanItem, PlanResponse } from "./api-types";
+import { isPartRef, type PartRef } from "./part-ref";
 import { joinPlan } from "./join-plan";
 import { linkEnds, solveLink } from "./telescope-link";
 import { nearestChain } from "./nearest-chain";
 import { whatToChange } from "./what-to-change";
 
-type Ref = { partId: string };
-const isRef = (v: unknown): v is Ref => typeof v === "object" && v !== null && "partId" in v;
 
 export type PlanInput = {
-  optics: Ref | Optics;
-  camera: Ref | Camera;
-  corrector?: Ref;
-  stations?: (Ref | Part)[];
+  optics: PartRef | Optics;
+  camera: PartRef | Camera;
+  corrector?: PartRef;
+  stations?: (PartRef | Part)[];
   filters?: SolveRequest["filters"];
   parts?: Part[];
   source?: { kind: "catalog" | "owned" | "shop" | "shops"; shop?: string; owned?: boolean };
@@ -49,11 +48,11 @@ export async function catalogConnectors() {
 }
 
 async function resolveRefs(input: PlanInput) {
-  const refs = [input.optics, input.camera, input.corrector, ...(input.stations ?? [])].filter(isRef).map((r) => r.partId);
+  const refs = [input.optics, input.camera, input.corrector, ...(input.stations ?? [])].filter(isPartRef).map((r) => r.partId);
   const rows = await getApprovedPartsByRefs({ refs });
   const byRef = new Map<string, PartRow>();
   for (const r of rows) { byRef.set(r.slug, r); byRef.set(r.id, r); }
-  const get = (ref: Ref, field: string, kinds: string[] | null, what: string): PartRow => {
+  const get = (ref: PartRef, field: string, kinds: string[] | null, what: string): PartRow => {
     const row = byRef.get(ref.partId);
     if (!row) throw new AppError("not_found:part", `No approved part "${ref.partId}" in the catalog.`, { [field]: [`No approved part "${ref.partId}"`] });
     if (kinds && !kinds.includes(row.kind)) throw new AppError("bad_request:validation", `${row.maker} ${row.model} is not ${what}.`, { [field]: [`Not ${what}`] });
@@ -70,7 +69,7 @@ function collectIds(result: SolveResult | null, into: Set<string>) {
 
 /** Solve a plan whose items may be catalog references; inline-only requests are solved as they are. */
 export async function runPlan({ input, viewer }: { input: PlanInput; viewer: SessionUser | null }): Promise<SolveResult | PlanResponse> {
-  const allInline = !isRef(input.optics) && !isRef(input.camera) && !input.corrector && !(input.stations ?? []).some(isRef) && input.parts;
+  const allInline = !isPartRef(input.optics) && !isPartRef(input.camera) && !input.corrector && !(input.stations ?? []).some(isPartRef) && input.parts;
   const base = { filters: input.filters, maxParts: input.maxParts, maxSolutions: input.maxSolutions };
   if (allInline) {
     const optics = input.backFocusToleranceMm !== undefined ? { ...(input.optics as Optics), backFocusToleranceMm: input.backFocusToleranceMm } : input.optics as Optics;
@@ -104,7 +103,7 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
   let optics: Optics;
   let focalLengthMm: number | null = null, apertureMm: number | null = null, focalRatio: number | null = null;
   let mainRow: PartRow | null = null;
-  if (isRef(input.optics)) {
+  if (isPartRef(input.optics)) {
     mainRow = get(input.optics, "optics.partId", ["optics"], "a telescope, an astrograph or a corrector");
     if (input.corrector) {
       correctorRow = get(input.corrector, "corrector.partId", ["optics"], "a corrector");
@@ -120,12 +119,12 @@ export async function runPlan({ input, viewer }: { input: PlanInput; viewer: Ses
     focalRatio = optics.focalRatio ?? null;
   }
 
-  const cameraRow = isRef(input.camera) ? get(input.camera, "camera.partId", ["camera"], "a camera") : null;
+  const cameraRow = isPartRef(input.camera) ? get(input.camera, "camera.partId", ["camera"], "a camera") : null;
   const camera = cameraRow ? buildCamera(cameraRow) : (input.camera as Camera);
   if (cameraRow) items[camera.id] = rowToPlanItem(cameraRow);
 
   const stations = (input.stations ?? []).map((s, i) => {
-    if (!isRef(s)) return s;
+    if (!isPartRef(s)) return s;
     const row = get(s, `stations.${i}.partId`, null, "a device");
     if (row.kind === "optics" || row.kind === "camera") throw new AppError("bad_request:validation", `${row.maker} ${row.model} cannot be a device in the middle of the train.`, { [`stations.${i}.partId`]: ["Optics and cameras go at the ends"] });
     items[row.slug] = rowToPlanItem(row);

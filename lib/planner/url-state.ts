@@ -8,9 +8,12 @@
 // extra plate in the beam; `tol`: back focus tolerance override (mm); `alt`: the chosen
 // alternative, counted from 1. Values that do not parse are dropped, never thrown.
 
+import type { LengthUnit } from "@/lib/units";
+
+export type { LengthUnit };
+
 export type Glass = { thicknessMm: number; refractiveIndex: number };
 export type SourceKind = "catalog" | "owned" | "shop";
-export type LengthUnit = "mm" | "in";
 
 export type PlanState = {
   optics: string | null;

@@ -26,10 +26,10 @@ type Option = { change: Change; apply: (r: SolveRequest) => SolveRequest; group:
 
 function options({ request, cameras, correctors }: RemedyInput): Option[] {
   const out: Option[] = [];
-  (request.stations ?? []).forEach((st, index) => out.push({
+  for (const [index, st] of (request.stations ?? []).entries()) {
     // Removals are applied by index in solveWith, all at once.
-    change: { kind: "remove-station", index, id: st.id }, group: `station-${index}`, apply: (r) => r,
-  }));
+    out.push({ change: { kind: "remove-station", index, id: st.id }, group: `station-${index}`, apply: (r) => r });
+  }
   for (const cam of cameras) {
     if (cam.id === request.camera.id) continue;
     out.push({ change: { kind: "replace-camera", id: cam.id }, group: "camera", apply: (r) => ({ ...r, camera: cam }) });

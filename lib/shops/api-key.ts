@@ -18,5 +18,5 @@ export function apiKeyFrom(headers: Headers): string | null {
   const auth = headers.get("authorization");
   const bearer = auth?.match(/^Bearer\s+(\S+)$/i)?.[1];
   const key = bearer ?? headers.get("x-api-key");
-  return key && key.startsWith(KEY_PREFIX) && key.length < 200 ? key : null;
+  return key?.startsWith(KEY_PREFIX) && key.length < 200 ? key : null;
 }

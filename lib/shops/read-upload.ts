@@ -1,4 +1,5 @@
 import { AppError } from "@/lib/errors";
+import { readBodyBytes } from "@/lib/http/body";
 import { LIMITS } from "@/lib/validation/shops";
 
 const tooLarge = () => new AppError("payload_too_large", `The file is larger than ${LIMITS.importBytes / 1024 / 1024} MB; split it and import the parts one after the other.`);
@@ -10,19 +11,10 @@ const tooLarge = () => new AppError("payload_too_large", `The file is larger tha
 export async function readCsvUpload(request: Request, maxBytes: number = LIMITS.importBytes): Promise<string> {
   if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
   if (!request.body) throw new AppError("bad_request:csv", "Send the CSV file as the request body.");
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > maxBytes) { await reader.cancel(); throw tooLarge(); }
-    chunks.push(value);
-  }
-  if (size === 0) throw new AppError("bad_request:csv", "The file is empty.");
+  const bytes = await readBodyBytes(request, maxBytes, tooLarge);
+  if (bytes.byteLength === 0) throw new AppError("bad_request:csv", "The file is empty.");
   try {
-    return new TextDecoder("utf-8", { fatal: true }).decode(Buffer.concat(chunks));
+    return new TextDecoder("utf-8", { fatal: true }).decode(bytes);
   } catch {
     throw new AppError("bad_request:csv", "The file is not UTF-8 text; save it as CSV (UTF-8) and try again.");
   }

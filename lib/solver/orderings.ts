@@ -5,7 +5,6 @@
 
 import { materialize } from "./chain";
 import { getClasses } from "./classes";
-import { countDetours } from "./detours";
 import type { Problem } from "./problem";
 import { stationMove } from "./topk";
 import type { Chain } from "./types";

@@ -131,6 +131,5 @@ export type SolveResult = {
 export const DEFAULT_MAX_PARTS = 10;
 export const DEFAULT_MAX_SOLUTIONS = 5;
 export const DEFAULT_TOLERANCE_MM = 0.5;
-export const DEFAULT_REFRACTIVE_INDEX = 1.5;
 /** Slack on every length comparison (mm), as the contract says. */
 export const LENGTH_SLACK_MM = 1e-6;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { unpackCursor } from "./cursor";
 import { UUID } from "./ids";
 import { noNul } from "./nul";
 
@@ -65,7 +66,7 @@ export const listBuildsQuerySchema = z.object({
 
 /** A builds-list cursor is "endorsed,createdAt,id" in base64url; null when it is not one of ours. */
 export function decodeBuildCursor(cursor: string): { endorsed: 0 | 1; at: string; id: string } | null {
-  const [e, at, id, extra] = Buffer.from(cursor, "base64url").toString("utf8").split(",");
+  const [e, at, id, extra] = unpackCursor(cursor);
   if (extra !== undefined || !/^[01]$/.test(e ?? "") || !UUID.test(id ?? "") || !/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d{1,6})?Z$/.test(at ?? "") || Number.isNaN(Date.parse(at))) return null;
   return { endorsed: Number(e) as 0 | 1, at, id };
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { packCursor, unpackCursor } from "./cursor";
 import { isKnownInterface } from "@/lib/interfaces";
 import { noNul } from "./nul";
 import { PART_KINDS } from "./parts";
@@ -15,14 +16,12 @@ export const listPartsQuerySchema = z.object({
 });
 export type ListPartsQuery = z.infer<typeof listPartsQuerySchema>;
 
-export function encodeCursor(slug: string): string {
-  return Buffer.from(slug, "utf8").toString("base64url");
-}
+export const encodeCursor = (slug: string): string => packCursor(slug);
 /**
  * What a cursor names — a slug (keyset paging) or `#<offset>` (paging ranked search results) —
  * or null when it names neither (slugs are lowercase letters, digits and dashes).
  */
 export function decodeCursor(cursor: string): string | null {
-  const slug = Buffer.from(cursor, "base64url").toString("utf8");
-  return /^(#\d{1,6}|[a-z0-9][a-z0-9-]{0,199})$/.test(slug) ? slug : null;
+  const [slug, extra] = unpackCursor(cursor);
+  return extra === undefined && /^(#\d{1,6}|[a-z0-9][a-z0-9-]{0,199})$/.test(slug) ? slug : null;
 }

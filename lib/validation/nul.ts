@@ -1,6 +1,6 @@
 // PostgreSQL text cannot hold U+0000: a NUL in any string (or key) is refused as bad input
 // before it reaches a query, instead of failing there as a 500.
-import { z } from "zod";
+import type { z } from "zod";
 
 export const NUL_MESSAGE = "Contains a NUL character (U+0000)";
 export const hasNul = (s: string) => s.includes("\u0000");

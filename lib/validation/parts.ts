@@ -101,7 +101,7 @@ export const partFormSchema = z.preprocess((raw) => {
   const v = { ...(raw as Record<string, unknown>) };
   for (const side of ["front", "rear"] as const) {
     const port = v[side] as { interface?: string } | null | undefined;
-    if (!port || !port.interface) v[side] = null;
+    if (!port?.interface) v[side] = null;
   }
   if (v.specs && typeof v.specs === "object") {
     v.specs = Object.fromEntries(Object.entries(v.specs as Record<string, unknown>).filter(([, x]) => x !== undefined && x !== "" && !(typeof x === "number" && Number.isNaN(x))));

@@ -29,7 +29,10 @@ export function makeCatalog(n: number, shape: Shape, seed = 42): Part[] {
   const total = weights.reduce((a, b) => a + b, 0);
   const popular = () => {
     let x = r() * total;
-    for (let i = 0; i < weights.length; i++) if ((x -= weights[i]) <= 0) return iface(i);
+    for (let i = 0; i < weights.length; i++) {
+      x -= weights[i];
+      if (x <= 0) return iface(i);
+    }
     return iface(INTERFACE_COUNT - 1);
   };
   const anyIface = () => iface(Math.floor(r() * INTERFACE_COUNT));

@@ -60,7 +60,7 @@ try {
     const page = await context.newPage();
     page.on("request", (r) => {
       const h = r.headers();
-      if (!h["next-router-prefetch"] && !h["rsc"]) return;
+      if (!h["next-router-prefetch"] && !h.rsc) return;
       const path = new URL(r.url()).pathname;
       prefetches.set(path, (prefetches.get(path) ?? 0) + 1);
     });

@@ -145,10 +145,10 @@ describe("rough edges in Chromium", () => {
           const hit = (a: DOMRect, b: DOMRect) => a.left < b.right - 0.5 && b.left < a.right - 0.5 && a.top < b.bottom - 0.5 && b.top < a.bottom - 0.5;
           const callouts = [...svg.querySelectorAll("[data-callout]")].map((g) => ({ text: g.querySelector("text")!, line: g.querySelector("line")! }));
           const out: string[] = [];
-          callouts.forEach((a, i) => callouts.forEach((b, j) => {
+          for (const [i, a] of callouts.entries()) for (const [j, b] of callouts.entries()) {
             if (i < j && hit(box(a.text), box(b.text))) out.push(`“${a.text.textContent}” overlaps “${b.text.textContent}”`);
             if (i !== j && hit(box(a.line), box(b.text))) out.push(`the leader of “${a.text.textContent}” crosses “${b.text.textContent}”`);
-          }));
+          }
           return out;
         });
         expect(problems, `${slug} at ${width} px`).toEqual([]);

@@ -2,7 +2,7 @@
 // dodge and that two app instances share, because they are counted in PostgreSQL. The
 // general suite runs with limits off; this file starts two more instances of the same build,
 // on the same database, with limits on.
-import { type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import path from "node:path";
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";

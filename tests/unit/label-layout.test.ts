@@ -33,7 +33,10 @@ describe("layoutCallouts", () => {
     // at the left edge, used to reach over the second leader.
     const raw = [[16, 52.00000000000001], [16, 20], [16, 20], [26.00000000000004, 20], [25.00000000000032, 57.000000000000384], [16, 24.000000000000014], [16, 24.000000000000014], [16, 20]];
     let x = 20;
-    const labels = raw.map(([gap, width]) => ({ cx: (x += gap), width }));
+    const labels = raw.map(([gap, width]) => {
+      x += gap;
+      return { cx: x, width };
+    });
     expect(collisions(labels, layoutCallouts(labels, 0, Infinity))).toEqual([]);
   });
 
@@ -43,7 +46,10 @@ describe("layoutCallouts", () => {
       fc.array(fc.record({ gap: fc.double({ min: MIN_LEADER_GAP, max: 300, noNaN: true }), width: fc.double({ min: 20, max: 160, noNaN: true }) }), { minLength: 1, maxLength: 14 }),
       (raw) => {
         let x = 20;
-        const labels = raw.map((r) => ({ cx: (x += r.gap), width: r.width }));
+        const labels = raw.map((r) => {
+          x += r.gap;
+          return { cx: x, width: r.width };
+        });
         expect(collisions(labels, layoutCallouts(labels, 0, Infinity))).toEqual([]);
       }), { numRuns: 1000 });
   });

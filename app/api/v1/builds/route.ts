@@ -1,6 +1,7 @@
 // POST /api/v1/builds — save a solved plan as a build; GET — list public builds (or your own with mine=1)
 import { listBuilds } from "@/db/queries/builds";
-import { parseJsonBody, parseWith, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody, parseWith } from "@/lib/http/body";
 import { saveBuild } from "@/lib/builds/save";
 import { buildUrl, siteOrigin } from "@/lib/builds/site-url";
 import { buildSummary } from "@/lib/builds/to-json";

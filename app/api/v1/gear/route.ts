@@ -2,7 +2,8 @@
 // PUT /api/v1/gear — set how many of a part they own (0 removes it)
 import { listOwnedParts, setOwnedQuantity } from "@/db/queries/gear";
 import { getPartOrThrow } from "@/db/queries/parts";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { setGearSchema } from "@/lib/validation/gear";
 import { rowToApiPart } from "@/lib/catalog/rows";
 

@@ -1,6 +1,7 @@
 // GET /api/v1/orders?shop=<slug> — a shop's quotes and orders, for its members; without ?shop, the buyer's own
 import { getMemberShopOrThrow, listBuyerQuotes, listShopQuotes } from "@/db/queries/orders";
-import { parseWith, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseWith } from "@/lib/http/body";
 import { displayStatus } from "@/lib/payments/status";
 import { listShopOrdersSchema } from "@/lib/validation/orders";
 

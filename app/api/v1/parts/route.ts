@@ -1,6 +1,7 @@
 // GET /api/v1/parts — search the approved catalog (q, kind, interface, limit, cursor)
 import { listApprovedParts } from "@/db/queries/parts";
-import { parseWith, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseWith } from "@/lib/http/body";
 import { listPartsQuerySchema } from "@/lib/validation/catalog";
 
 export const dynamic = "force-dynamic";

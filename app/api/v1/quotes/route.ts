@@ -1,6 +1,7 @@
 // POST /api/v1/quotes — a buyer asks a shop for a quote on a build; GET — the buyer's own quotes and orders
 import { listBuyerQuotes } from "@/db/queries/orders";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { createQuoteRequest } from "@/lib/payments/quote-request";
 import { displayStatus } from "@/lib/payments/status";
 import { createQuoteSchema } from "@/lib/validation/orders";

@@ -1,7 +1,9 @@
 // POST /api/v1/solve — solve a train (inline parts, or catalog references resolved here)
-import { readJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { readJsonBody } from "@/lib/http/body";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { planJson } from "@/lib/planner/plan-cache";
+import { isPartRef } from "@/lib/planner/part-ref";
 import type { PlanInput } from "@/lib/planner/run-plan";
 import { planAcrossShops } from "@/lib/shops/across-shops";
 import { solveInWorker } from "@/lib/solve-pool/pool";
@@ -10,8 +12,6 @@ import { parsePlanRequest } from "@/lib/validation/plan";
 import { LIMITS } from "@/lib/validation/solve";
 
 export const dynamic = "force-dynamic";
-
-const isRef = (v: unknown) => typeof v === "object" && v !== null && "partId" in v;
 
 export const POST = withSession(async (request, { user }) => {
   const parsed = parsePlanRequest(await readJsonBody(request, LIMITS.requestBytes));
@@ -22,7 +22,7 @@ export const POST = withSession(async (request, { user }) => {
   const input = parsed.data as PlanInput;
   // An all-inline request carries its own (possibly huge) parts list: solve it on a worker
   // thread under a time budget. Catalog plans use the catalog graph cached in this process.
-  if (input.parts && !input.corrector && ![input.optics, input.camera, ...(input.stations ?? [])].some(isRef)) {
+  if (input.parts && !input.corrector && ![input.optics, input.camera, ...(input.stations ?? [])].some(isPartRef)) {
     const optics = input.backFocusToleranceMm !== undefined ? { ...(input.optics as Optics), backFocusToleranceMm: input.backFocusToleranceMm } : input.optics as Optics;
     return Response.json(await solveInWorker({
       optics, camera: input.camera as Camera, stations: input.stations as Part[] | undefined, parts: input.parts,

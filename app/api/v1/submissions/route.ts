@@ -1,7 +1,8 @@
 // POST /api/v1/submissions — a member submits a missing part with its spec sheet (multipart)
 // GET  /api/v1/submissions — moderators: the pending queue; members: their own submissions
 import { countSubmissionsSince, createSubmission, listPendingSubmissions, listSubmissionsBy } from "@/db/queries/submissions";
-import { allowed, parseWith, withSession } from "@/lib/auth/session";
+import { allowed, withSession } from "@/lib/auth/session";
+import { parseWith } from "@/lib/http/body";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { readBodyBytes } from "@/lib/http/body";

@@ -17,7 +17,7 @@ export const dynamic = "force-dynamic";
 export const metadata = { title: "Shop order", robots: { index: false } };
 
 type Props = { params: Promise<{ id: string }> };
-const when = (d: Date | string | null) => (d ? new Date(d).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", timeZone: "UTC" }) + " UTC" : "—");
+const when = (d: Date | string | null) => (d ? `${new Date(d).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", timeZone: "UTC" })} UTC` : "—");
 
 async function load(id: string, userId: string) {
   try {

@@ -1,6 +1,7 @@
 // GET /api/v1/builds/:slug — one build as its viewer may see it; PATCH (owner) — title, notes, visibility; DELETE (owner or admin)
-import { deleteBuild, getBuildOrThrow, listBuildAudit, listBuildThreads, recordOwnerEdit, updateOwnBuild } from "@/db/queries/builds";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { ANY_OWNER, deleteBuild, getBuildOrThrow, listBuildAudit, listBuildThreads, recordOwnerEdit, updateOwnBuild } from "@/db/queries/builds";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { canDeleteBuild, isModeratorRole, isOwner, toBuildViewer } from "@/lib/builds/access";
 import { siteOrigin } from "@/lib/builds/site-url";
 import { buildToJson } from "@/lib/builds/to-json";
@@ -34,6 +35,6 @@ export const DELETE = withSession<Params>(async (_request, { user, params }) => 
   const viewer = toBuildViewer(user);
   const { build } = await getBuildOrThrow({ slug: params.slug, viewer });
   if (!canDeleteBuild(build, viewer)) throw new AppError("forbidden:build", "Only the owner (or an admin) can delete this build.");
-  await deleteBuild({ buildId: build.id, ownerId: isOwner(build, viewer) ? user.id : "any-owner" });
+  await deleteBuild({ buildId: build.id, ownerId: isOwner(build, viewer) ? user.id : ANY_OWNER });
   return new Response(null, { status: 204 });
 });

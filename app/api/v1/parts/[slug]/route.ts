@@ -1,7 +1,8 @@
 // GET   /api/v1/parts/:slug — one part by slug or id
 // PATCH /api/v1/parts/:slug — a moderator corrects a part; builds that use it re-check themselves
 import { getPartOrThrow, updatePart } from "@/db/queries/parts";
-import { allowed, parseJsonBody, withSession } from "@/lib/auth/session";
+import { allowed, withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { recheckBuildsForParts } from "@/lib/builds/recheck";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { partPatchSchema } from "@/lib/validation/submissions";

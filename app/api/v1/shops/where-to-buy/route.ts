@@ -1,6 +1,7 @@
 // POST /api/v1/shops/where-to-buy — which shops can supply these parts: totals per shop and what each lacks
 import { getApprovedPartsByRefs } from "@/db/queries/parts";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { whereToBuyForParts } from "@/lib/shops/where-to-buy-query";
 import { whereToBuySchema } from "@/lib/validation/shops";
 

@@ -1,6 +1,7 @@
 // POST /api/v1/builds/:slug/hide { reason } — hide a build from everyone but its owner and moderators; DELETE — show it again
 import { getBuildOrThrow, setBuildHidden } from "@/db/queries/builds";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { toBuildViewer } from "@/lib/builds/access";
 import { notifyBuildOwner } from "@/lib/builds/moderation-mail";
 import { hideBuildSchema } from "@/lib/validation/builds";

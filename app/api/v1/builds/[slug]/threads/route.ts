@@ -1,6 +1,7 @@
 // POST /api/v1/builds/:slug/threads { url } — attach a forum thread where the build was linked (moderators); DELETE { url } — detach it
 import { addBuildThread, getBuildOrThrow, listBuildThreads, removeBuildThread } from "@/db/queries/builds";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { toBuildViewer } from "@/lib/builds/access";
 import { threadUrlSchema } from "@/lib/validation/builds";
 

@@ -1,5 +1,6 @@
 // POST /api/v1/orders/[id]/refund — the shop refunds a paid order in full through the payment provider
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { refundOrder } from "@/lib/payments/checkout";
 import { refundOrderSchema } from "@/lib/validation/orders";
 

@@ -1,7 +1,8 @@
 // POST /api/v1/orders/[id]/ship — the shop marks a paid order shipped, with tracking text; the buyer gets an e-mail
 import { getShopQuoteOrThrow } from "@/db/queries/orders";
 import { markShipped } from "@/db/queries/orders-write";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { orderMail } from "@/lib/payments/mail";
 import { shipOrderSchema } from "@/lib/validation/orders";
 

@@ -1,7 +1,8 @@
 // POST /api/v1/quotes/[id]/answer — the shop sends (or revises) its quote; the buyer gets an e-mail
 import { getShopQuoteOrThrow } from "@/db/queries/orders";
 import { answerQuote } from "@/db/queries/orders-write";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { orderMail } from "@/lib/payments/mail";
 import { quoteToJson } from "@/lib/payments/to-json";
 import { answerQuoteSchema } from "@/lib/validation/orders";

@@ -2,8 +2,9 @@
 import { getQuoteForViewerOrThrow, listShopMemberEmails } from "@/db/queries/orders";
 import { cancelQuote } from "@/db/queries/orders-write";
 import { canInShop } from "@/lib/auth/roles";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
+import { parseJsonBody } from "@/lib/http/body";
 import { orderMail } from "@/lib/payments/mail";
 import { cancelQuoteSchema } from "@/lib/validation/orders";
 

@@ -1,6 +1,7 @@
 // GET/POST /api/v1/shops/[slug]/api-keys — the owner's keys for the shop's own stock system (secret shown once)
 import { insertApiKey, listApiKeys } from "@/db/queries/shops-keys";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { requireShopMember } from "@/lib/shops/access";
 import { newApiKey } from "@/lib/shops/api-key";
 import { createApiKeySchema } from "@/lib/validation/shops";

@@ -1,6 +1,7 @@
 // GET/PUT /api/v1/shops/[slug]/inventory — the shop's stock, for its members or its API keys
 import { listInventory } from "@/db/queries/shops-inventory";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { requireShopActor } from "@/lib/shops/access";
 import { putInventory } from "@/lib/shops/inventory";
 import { inventoryPutSchema } from "@/lib/validation/shops";

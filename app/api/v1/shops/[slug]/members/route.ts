@@ -1,6 +1,7 @@
 // GET/POST /api/v1/shops/[slug]/members — the shop's people (members), and the owner inviting staff by e-mail
 import { listMembers, listPendingInvitations } from "@/db/queries/shops";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { requireShopMember } from "@/lib/shops/access";
 import { inviteStaff } from "@/lib/shops/members";
 import { inviteStaffSchema } from "@/lib/validation/shops";

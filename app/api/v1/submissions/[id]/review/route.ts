@@ -1,6 +1,7 @@
 // POST /api/v1/submissions/:id/review — a moderator approves or rejects a submitted part
 import { getSubmissionOrThrow, reviewSubmission } from "@/db/queries/submissions";
-import { parseJsonBody, withSession } from "@/lib/auth/session";
+import { withSession } from "@/lib/auth/session";
+import { parseJsonBody } from "@/lib/http/body";
 import { rowToApiPart } from "@/lib/catalog/rows";
 import { AppError } from "@/lib/errors";
 import { sendMail } from "@/lib/mail";
