@@ -3,6 +3,7 @@
 // each joint labelled with its interface and which side is male.
 import { ReactFlow, type Viewport } from "@xyflow/react";
 import { useEffect, useMemo, useState } from "react";
+import { TrainList } from "@/components/builds/train-list";
 import type { LengthUnit } from "@/lib/units";
 import type { Train, TrainItem } from "./train-model";
 import { useWidth } from "./use-width";
@@ -72,8 +73,10 @@ export function TrainDiagram({ train, unit, label, warnings }: { train: Train; u
   const overflow = fitted.overflow;
   return (
     <figure className="m-0">
+      {/* Phones read the train as a list, sky at the top: no sideways dragging. */}
+      <TrainList train={train} unit={unit} className="sm:hidden" />
       <div ref={ref} data-testid="train-diagram" data-items={nodes.length} aria-label={label} role="group" style={{ height: H }}
-        className="relative w-full overflow-hidden rounded-md border border-line bg-bg">
+        className="relative hidden w-full overflow-hidden rounded-md border border-line bg-bg sm:block">
         <span aria-hidden className="pointer-events-none absolute left-3 top-2 z-10 text-[10px] font-medium uppercase tracking-[0.2em] text-muted">☾ Sky</span>
         <span aria-hidden className="pointer-events-none absolute right-3 top-2 z-10 text-[10px] font-medium uppercase tracking-[0.2em] text-muted">Sensor ▣</span>
         <ReactFlow
@@ -96,7 +99,7 @@ export function TrainDiagram({ train, unit, label, warnings }: { train: Train; u
           panOnDrag
         />
       </div>
-      <figcaption className="mt-1.5 text-xs text-muted">
+      <figcaption className="mt-1.5 hidden text-xs text-muted sm:block">
         {overflow ? <strong className="font-medium text-text">Drag sideways to follow the train to the sensor. </strong> : null}
         Box widths grow with length{connected ? "; the budget below is to scale" : ""}. Each joint reads sky side → sensor side: ♂ male, ♀ female.
       </figcaption>
