@@ -36,6 +36,11 @@ export async function listShops() {
   }).from(organization).leftJoin(shopProfiles, eq(shopProfiles.organizationId, organization.id)).orderBy(asc(organization.name));
 }
 
+/** The public shop list: every shop without its internal id (the API's and the planner's). */
+export async function listPublicShops() {
+  return (await listShops()).map(({ id: _id, ...shop }) => shop);
+}
+
 /** The shops a user belongs to, with their role in each. */
 export async function listShopsOfUser({ userId }: { userId: string }) {
   const rows = await db.select({ ...shopColumns, role: member.role }).from(member)

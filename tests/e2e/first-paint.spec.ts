@@ -2,12 +2,10 @@
 // shows it without asking the solve API; edits still go to the API.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
-import { DEMO_CASES } from "@/seed/catalog";
 import { launch, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
+import { FLAGSHIP_PLAN as FLAGSHIP } from "../support/plans";
 
-const f = DEMO_CASES.flagship;
-const FLAGSHIP = `/plan?optics=${f.telescope}&corrector=${f.optics}&camera=${f.camera}&stations=${f.stations.join(",")}&filter=${f.filterThicknessMm}&n=1.5168`;
 
 describe("the planner's first paint", () => {
   let browser: Browser;

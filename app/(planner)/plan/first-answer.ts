@@ -4,7 +4,7 @@ import "server-only";
 // chosen parts, under the very keys the planner asks for. The client then takes over for edits.
 import { dehydrate, QueryClient, type DehydratedState } from "@tanstack/react-query";
 import { getApprovedPartsByRefs } from "@/db/queries/parts";
-import { listShops } from "@/db/queries/shops";
+import { listPublicShops } from "@/db/queries/shops";
 import { correctorJoins } from "@/lib/planner/corrector-joins";
 import type { SessionUser } from "@/lib/auth/session";
 import { rowToApiPart } from "@/lib/catalog/rows";
@@ -25,7 +25,7 @@ export async function firstAnswer({ state, viewer }: { state: PlanState; viewer:
   // telescope), fetched beside the solve so the page waits only for the slower of them.
   const optics = rows.find((r) => r.slug === state.optics);
   const side = Promise.all([
-    listShops().then((shops) => client.setQueryData(["shops"], asJson({ shops: shops.map(({ id: _id, ...s }) => s) }))),
+    listPublicShops().then((shops) => client.setQueryData(["shops"], asJson({ shops }))),
     optics?.specs.opticsRole === "telescope"
       ? correctorJoins({ telescope: optics.slug }).then((j) => client.setQueryData(["corrector-joins", optics.slug], asJson(j)))
       : null,

@@ -1,10 +1,9 @@
 // GET /api/v1/shops — every shop, with how many parts it has in stock (public)
-import { listShops } from "@/db/queries/shops";
+import { listPublicShops } from "@/db/queries/shops";
 import { withSession } from "@/lib/auth/session";
 
 export const dynamic = "force-dynamic";
 
 export const GET = withSession(async () => {
-  const shops = await listShops();
-  return Response.json({ shops: shops.map(({ id: _id, ...s }) => s) });
+  return Response.json({ shops: await listPublicShops() });
 }, { anonymous: true });
