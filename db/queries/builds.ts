@@ -162,9 +162,9 @@ export async function listReviewQueue({ limit = 50 }: { limit?: number } = {}) {
 }
 
 /** Builds that use any of these catalog slugs (the re-check's work list). */
-export async function listBuildsUsingParts({ slugs }: { slugs: string[] }) {
+export async function listBuildsUsingParts({ slugs, tx = db }: { slugs: string[]; tx?: Pick<typeof db, "select" | "execute"> }) {
   if (!slugs.length) return [];
-  return db.select().from(builds).where(arrayOverlaps(builds.partIds, slugs)).orderBy(asc(builds.createdAt));
+  return tx.select().from(builds).where(arrayOverlaps(builds.partIds, slugs)).orderBy(asc(builds.createdAt));
 }
 
 /** Store a re-check verdict; audit it when the verdict flips. */

@@ -64,7 +64,15 @@ export async function getCatalogVersion(): Promise<number> {
 }
 
 /** A moderator's correction to a catalog part; bumps the catalog version when it is approved. */
-export async function updatePart({ slug, patch }: { slug: string; patch: import("@/lib/validation/submissions").PartPatch }) {
+/**
+ * A moderator's correction. `inSameTransaction` runs after the update of an approved part and
+ * before the commit (the route queues the re-checks of builds that use the part there, so that
+ * a crash can never leave the part changed and its re-checks unqueued).
+ */
+export async function updatePart({ slug, patch, inSameTransaction }: {
+  slug: string; patch: import("@/lib/validation/submissions").PartPatch;
+  inSameTransaction?: (tx: Tx, updated: typeof parts.$inferSelect) => Promise<void>;
+}) {
   return db.transaction(async (tx) => {
     const [row] = await tx.select().from(parts).where(eq(parts.slug, slug)).for("update");
     if (!row) throw new AppError("not_found:part", `No part "${slug}" in the catalog.`);
@@ -75,7 +83,10 @@ export async function updatePart({ slug, patch }: { slug: string; patch: import(
     if (rear !== undefined) { set.rearInterface = rear?.interface ?? null; set.rearGender = rear?.gender ?? null; }
     if (specs) set.specs = { ...row.specs, ...specs };
     const [updated] = await tx.update(parts).set(set).where(eq(parts.id, row.id)).returning();
-    if (row.status === "approved") await bumpCatalogVersion(tx);
+    if (row.status === "approved") {
+      await bumpCatalogVersion(tx);
+      await inSameTransaction?.(tx, updated);
+    }
     return updated;
   });
 }

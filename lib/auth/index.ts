@@ -1,5 +1,6 @@
 import "server-only";
 import { betterAuth } from "better-auth";
+import { APIError, createAuthMiddleware } from "better-auth/api";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { admin, organization } from "better-auth/plugins";
@@ -7,7 +8,30 @@ import { getDb } from "@/db/client";
 import * as schema from "@/db/schema";
 import { configuredSiteUrl, trustedOrigins } from "@/lib/http/origin";
 import { linkMail, sendMail } from "@/lib/mail";
+import { isBanned } from "./ban";
 import { shopAc, shopRoles, siteAc, siteRoles } from "./roles";
+
+// A ban set by an admin through better-auth revokes the user's sessions at once; a ban set any
+// other way (a database update, a ban that a job applies) must not leave a live session behind.
+// get-session answers null for a banned user (and deletes their sessions); every other auth
+// endpoint called with a banned user's session cookie is refused.
+const sessionOfBanned = createAuthMiddleware(async (ctx) => {
+  if (ctx.path === "/get-session") return;
+  const token = await ctx.getSignedCookie(ctx.context.authCookies.sessionToken.name, ctx.context.secret);
+  if (!token) return;
+  const found = await ctx.context.internalAdapter.findSession(token);
+  if (!found || !isBanned(found.user as { banned?: boolean | null; banExpires?: Date | null })) return;
+  await ctx.context.internalAdapter.deleteUserSessions(found.user.id);
+  if (ctx.path === "/sign-out") return; // let it clear the cookie
+  throw new APIError("UNAUTHORIZED", { message: "This account is banned; its sessions have ended.", code: "BANNED_USER" });
+});
+const dropBannedSession = createAuthMiddleware(async (ctx) => {
+  if (ctx.path !== "/get-session") return;
+  const returned = ctx.context.returned as { user?: { id: string; banned?: boolean | null; banExpires?: Date | null } } | null | undefined;
+  if (!returned || !("user" in returned) || !isBanned(returned.user)) return;
+  await ctx.context.internalAdapter.deleteUserSessions(returned.user?.id ?? "");
+  return ctx.json(null);
+});
 
 function createAuth() {
   return betterAuth({
@@ -56,6 +80,7 @@ function createAuth() {
       // address, so this header can no longer be made up by the client to dodge the limits.
       ipAddress: { ipAddressHeaders: ["x-forwarded-for"] },
     },
+    hooks: { before: sessionOfBanned, after: dropBannedSession },
     plugins: [
       admin({ ac: siteAc, roles: siteRoles, defaultRole: "member", adminRoles: ["admin"] }),
       organization({ ac: shopAc, roles: shopRoles, creatorRole: "owner", allowUserToCreateOrganization: true }),

@@ -3,6 +3,7 @@ import { headers } from "next/headers";
 import { AppError, toErrorResponse } from "@/lib/errors";
 import { assertTrustedOrigin } from "@/lib/http/origin";
 import { consumeLimit, type LimitName } from "@/lib/http/rate-limit";
+import { isBanned } from "./ban";
 import { getAuth } from "./index";
 import { can, roleOf, type SitePermission, type SiteRole } from "./roles";
 
@@ -11,8 +12,8 @@ export type SessionUser = { id: string; email: string; name: string; role: SiteR
 export async function getSessionUser(requestHeaders?: Headers): Promise<SessionUser | null> {
   const session = await getAuth().api.getSession({ headers: requestHeaders ?? (await headers()) });
   if (!session?.user) return null;
-  const u = session.user as typeof session.user & { role?: string | null; banned?: boolean | null };
-  if (u.banned) return null;
+  const u = session.user as typeof session.user & { role?: string | null; banned?: boolean | null; banExpires?: Date | null };
+  if (isBanned(u)) return null;
   return { id: u.id, email: u.email, name: u.name, role: roleOf(u.role), emailVerified: u.emailVerified };
 }
 

@@ -130,8 +130,11 @@ export async function recheckBuild(build: BuildRow): Promise<Verdict> {
   return verdict;
 }
 
-/** After a catalog part changes: queue a durable re-check of every build that uses it. */
-export async function recheckBuildsForParts({ slugs }: { slugs: string[] }): Promise<{ queued: number }> {
-  const list = await listBuildsUsingParts({ slugs: [...new Set(slugs)] });
-  return { queued: await enqueueRechecks(list.map((b) => b.id)) };
+/**
+ * After a catalog part changes: queue a durable re-check of every build that uses it — inside
+ * the transaction that changed the part when one is given.
+ */
+export async function recheckBuildsForParts({ slugs, tx }: { slugs: string[]; tx?: Parameters<typeof listBuildsUsingParts>[0]["tx"] }): Promise<{ queued: number }> {
+  const list = await listBuildsUsingParts({ slugs: [...new Set(slugs)], tx });
+  return { queued: await enqueueRechecks(list.map((b) => b.id), tx) };
 }

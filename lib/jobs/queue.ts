@@ -2,6 +2,7 @@ import "server-only";
 // The durable job queue (pg-boss, in the app's own PostgreSQL): e-mails and build re-checks are
 // stored as jobs first and done by the worker (lib/jobs/worker.ts), with retries, so a mail
 // server that is down loses nothing and a crash in the middle of a re-check resumes.
+import { type SQL, sql } from "drizzle-orm";
 import PgBoss from "pg-boss";
 
 export const QUEUES = {
@@ -41,10 +42,35 @@ export async function enqueueMail(message: MailJob): Promise<void> {
   await boss.send(QUEUES.mail.name, message);
 }
 
-/** Queue a re-check of each build; a build already waiting is not queued twice. */
-export async function enqueueRechecks(buildIds: string[]): Promise<number> {
+/** Anything that runs drizzle SQL: the pool or an open transaction. */
+type Executes = { execute: (query: SQL) => Promise<{ rows: unknown[] }> };
+
+/**
+ * pg-boss's connection option over a drizzle transaction, so that a job is written in the same
+ * transaction as the change it follows (both or neither). pg-boss hands over numbered
+ * placeholders ($1, $2…); each becomes a drizzle parameter, through drizzle's public `sql` API (undefined as NULL, as
+ * node-postgres would send it).
+ */
+export function jobsIn(tx: Executes): PgBoss.Db {
+  return {
+    async executeSql(text, values) {
+      const pieces = text.split(/\$(\d+)/);
+      const chunks = pieces.map((piece, i) => (i % 2 ? sql`${sql.param(values[Number(piece) - 1] ?? null)}` : sql.raw(piece)));
+      const res = await tx.execute(sql.join(chunks));
+      return { rows: res.rows };
+    },
+  };
+}
+
+/**
+ * Queue a re-check of each build; a build already waiting is not queued twice. With `tx` the jobs
+ * are written in that transaction (they exist exactly when it commits).
+ */
+export async function enqueueRechecks(buildIds: string[], tx?: Executes): Promise<number> {
   if (!buildIds.length) return 0;
   const boss = await getBoss();
-  await boss.insert(buildIds.map((buildId) => ({ name: QUEUES.recheck.name, data: { buildId }, singletonKey: buildId })));
+  const jobs = buildIds.map((buildId) => ({ name: QUEUES.recheck.name, data: { buildId }, singletonKey: buildId }));
+  if (tx) await boss.insert(jobs, { db: jobsIn(tx) });
+  else await boss.insert(jobs);
   return buildIds.length;
 }

@@ -16,7 +16,10 @@ export const GET = withSession<{ slug: string }>(async (_request, { user, params
 
 export const PATCH = withSession<{ slug: string }>(async (request, { params }) => {
   const patch = await parseJsonBody(request, partPatchSchema);
-  const updated = await updatePart({ slug: params.slug, patch });
-  const recheck = updated.status === "approved" ? await recheckBuildsForParts({ slugs: [updated.slug] }) : { queued: 0 };
+  let recheck = { queued: 0 };
+  const updated = await updatePart({
+    slug: params.slug, patch,
+    inSameTransaction: async (tx, part) => { recheck = await recheckBuildsForParts({ slugs: [part.slug], tx }); },
+  });
   return Response.json({ ...rowToApiPart(updated), recheck });
 }, { permission: { part: "review" } });
