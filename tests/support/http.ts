@@ -61,8 +61,8 @@ export async function outboxFor(email: string): Promise<OutboxMessage[]> {
   return messages.filter((m) => m.to.toLowerCase().includes(email.toLowerCase()));
 }
 
-/** Mail is delivered through SMTP asynchronously; poll briefly. */
-export async function waitForMail(email: string, subjectPart: string, timeoutMs = 10_000): Promise<OutboxMessage> {
+/** Mail is delivered through SMTP asynchronously, by the job worker; poll (a loaded machine can take seconds). */
+export async function waitForMail(email: string, subjectPart: string, timeoutMs = 30_000): Promise<OutboxMessage> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const found = (await outboxFor(email)).find((m) => m.subject.includes(subjectPart));
