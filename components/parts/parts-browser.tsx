@@ -11,6 +11,7 @@ import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { PART_KINDS } from "@/lib/validation/parts";
+import { fetchJson } from "@/components/api-client";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "./interface-chip";
 
@@ -58,9 +59,7 @@ export function PartsBrowser() {
       if (kind) sp.set("kind", kind);
       if (iface) sp.set("interface", iface);
       if (pageParam) sp.set("cursor", pageParam);
-      const res = await fetch(`/api/v1/parts?${sp}`, { signal });
-      if (!res.ok) throw new Error((await res.json()).error?.message ?? `The catalog answered ${res.status}`);
-      return res.json();
+      return fetchJson<Page>(`/api/v1/parts?${sp}`, { signal });
     },
     getNextPageParam: (last) => last.nextCursor ?? undefined,
   });

@@ -4,7 +4,8 @@ import type { ReactNode } from "react";
 import type { ApiPart } from "@/lib/catalog/rows";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { getInterface, interfaceHue, interfaceLabel } from "@/lib/interfaces";
-import { ApiError, usePart } from "./api";
+import { ApiError } from "@/components/api-client";
+import { usePart } from "./api";
 import { useLengthUnit } from "./length-unit";
 import { roleOf } from "./part-combobox";
 

@@ -8,7 +8,8 @@ import {
 } from "@/lib/planner/url-state";
 import { Button } from "@/components/ui/button";
 import type { PlanResponse } from "@/lib/planner/api-types";
-import { ApiError, usePart } from "./api";
+import { ApiError } from "@/components/api-client";
+import { usePart } from "./api";
 import { BeamOptions } from "./beam-options";
 import { PlanResults, type RenderActions } from "./plan-results";
 import { TrainChoices } from "./train-choices";

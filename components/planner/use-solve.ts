@@ -2,7 +2,7 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import type { SolveApiRequest } from "@/lib/planner/url-state";
-import { fetchJson } from "./api";
+import { fetchJson } from "@/components/api-client";
 import { useDebounced } from "./use-debounced";
 
 /**
