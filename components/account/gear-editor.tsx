@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useEffect, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { fetchJson } from "@/components/api-client";

@@ -6,7 +6,7 @@ import {
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useEffect, useMemo, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { INTERFACES, interfaceLabel } from "@/lib/interfaces";

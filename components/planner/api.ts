@@ -2,7 +2,7 @@
 // The planner's reads of the catalog API (through the shared client in components/api-client).
 import { useQuery } from "@tanstack/react-query";
 import { ApiError, fetchJson } from "@/components/api-client";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 
 export type PartsPage = { items: ApiPart[]; nextCursor: string | null };
 

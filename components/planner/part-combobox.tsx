@@ -3,7 +3,7 @@
 // Escape closes (and clears when already closed).
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useId, useMemo, useRef, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS } from "@/lib/format";
 import { interfaceLabel } from "@/lib/interfaces";
 import { formatMm } from "@/lib/units";
