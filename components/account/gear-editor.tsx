@@ -1,7 +1,8 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
-import { useEffect, useState } from "react";
+import { useState } from "react";
+import { useDebounce } from "use-debounce";
 import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS } from "@/lib/format";
 import { formatMm } from "@/lib/units";
@@ -19,8 +20,7 @@ export function GearEditor() {
     onSuccess: () => qc.invalidateQueries({ queryKey: ["gear"] }),
   });
   const [q, setQ] = useState("");
-  const [debounced, setDebounced] = useState("");
-  useEffect(() => { const t = setTimeout(() => setDebounced(q.trim()), 250); return () => clearTimeout(t); }, [q]);
+  const [debounced] = useDebounce(q.trim(), 250);
   const search = useQuery({
     queryKey: ["gear-search", debounced], enabled: debounced.length >= 2,
     queryFn: ({ signal }) => fetchJson<{ items: ApiPart[] }>(`/api/v1/parts?limit=12&q=${encodeURIComponent(debounced)}`, { signal }),
