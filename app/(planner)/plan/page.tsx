@@ -8,7 +8,6 @@ import { PlanWorkbench } from "./plan-workbench";
 import { defaultShopSource } from "@/lib/shops/default-source";
 import { EXAMPLE_PLAN_HREF } from "@/seed/example-plan";
 
-export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Planner" };
 
 type Search = Record<string, string | string[] | undefined>;

@@ -16,7 +16,6 @@ import { KIND_LABELS, formatGrams, formatPrice } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { getInterface } from "@/lib/interfaces";
 
-export const dynamic = "force-dynamic";
 
 function planHref(kind: string, slug: string) {
   if (kind === "optics") return `/plan?optics=${slug}`;
