@@ -2,6 +2,8 @@
 import { useState } from "react";
 
 /** Dim red on black for use at the telescope; remembered in a cookie for a year. */
+// Not next-themes: it keeps the choice in localStorage and applies it with an inline script before paint; the cookie lets
+// the server render the night palette and this button's state itself — no script to nonce (proxy.ts CSP), no flash, no mismatch.
 export function NightToggle({ initial }: { initial: boolean }) {
   const [night, setNight] = useState(initial);
   function toggle() {

@@ -16,3 +16,10 @@ export function formatPrice(cents: number | null | undefined): string {
 export function formatGrams(g: number | null | undefined): string {
   return g === null || g === undefined ? "—" : g >= 1000 ? `${(g / 1000).toFixed(2)} kg` : `${Math.round(g)} g`;
 }
+
+const andList = new Intl.ListFormat("en-GB", { style: "long", type: "conjunction" });
+
+/** "A, B and C" (British: no comma before "and"). lib/solver has its own listAnd: it imports nothing from outside. */
+export function listAnd(items: readonly string[]): string {
+  return andList.format(items);
+}

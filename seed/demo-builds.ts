@@ -1,7 +1,7 @@
 // Demo builds, saved through the running app's own API the way people save them, so the
 // stored results are exactly what the server solves. Idempotent: skipped when present.
 import { DEMO_PASSWORD } from "./accounts";
-import { DEMO_CASES, type DemoCase } from "./catalog";
+import { DEMO_CASES, DEMO_FILTER_INDEX, type DemoCase } from "./catalog";
 
 type Plan = { author: string; visibility: "public" | "unlisted"; endorse: boolean; title: string; notes: string; demo: DemoCase; threads?: string[] };
 
@@ -43,7 +43,7 @@ function requestFor(demo: DemoCase) {
     ...(demo.telescope ? { optics: { partId: demo.telescope }, corrector: { partId: demo.optics } } : { optics: { partId: demo.optics } }),
     camera: { partId: demo.camera },
     stations: demo.stations.map((partId) => ({ partId })),
-    filters: demo.filterThicknessMm ? [{ thicknessMm: demo.filterThicknessMm, refractiveIndex: 1.5168 }] : [],
+    filters: demo.filterThicknessMm ? [{ thicknessMm: demo.filterThicknessMm, refractiveIndex: DEMO_FILTER_INDEX }] : [],
     source: { kind: "catalog" },
   };
 }

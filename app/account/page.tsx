@@ -1,14 +1,13 @@
 import Link from "next/link";
-import { redirect } from "next/navigation";
+import { Suspense } from "react";
 import { SignOutButton } from "@/components/account/sign-out-button";
 import { OrdersCard } from "@/components/orders/orders-card";
 import { listMemberShops } from "@/db/queries/orders";
 import { Card, PageTitle } from "@/components/ui/card";
-import { getSessionUser } from "@/lib/auth/session";
+import { requireUser } from "@/lib/signed-in";
 import { YourShops } from "@/components/shops/your-shops";
 
 export const metadata = { title: "Account" };
-export const dynamic = "force-dynamic";
 
 const ROLE_WORDS = {
   member: "You can plan, save builds, keep a gear list and submit missing parts.",
@@ -16,9 +15,13 @@ const ROLE_WORDS = {
   admin: "You can do everything a moderator can, and manage accounts.",
 } as const;
 
+/** The orders card, with the shop's orders when this person works for a shop. */
+async function OrdersCardFor({ userId }: { userId: string }) {
+  return <OrdersCard shopMember={(await listMemberShops({ userId })).length > 0} />;
+}
+
 export default async function AccountPage() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?next=/account");
+  const user = await requireUser("/account");
   return (
     <div className="max-w-3xl">
       <PageTitle title="Your account" lead={`${user.name} · ${user.email}`}><SignOutButton /></PageTitle>
@@ -27,7 +30,7 @@ export default async function AccountPage() {
           <h2 className="font-medium text-ink">Role: <span className="capitalize">{user.role}</span></h2>
           <p className="mt-1 text-sm text-muted">{ROLE_WORDS[user.role]}</p>
         </Card>
-        <YourShops userId={user.id} />
+        <Suspense fallback={null}><YourShops userId={user.id} /></Suspense>
         <Card>
           <h2 className="font-medium text-ink">Your gear</h2>
           <p className="mt-1 text-sm text-muted">Mark the parts you own; the planner counts them as free and lists only what is still to buy.</p>
@@ -38,7 +41,7 @@ export default async function AccountPage() {
           <p className="mt-1 text-sm text-muted">Trains you saved as links.</p>
           <Link href="/builds?mine=1" className="mt-3 inline-block text-sm underline decoration-brass underline-offset-4">See my builds</Link>
         </Card>
-        <OrdersCard shopMember={(await listMemberShops({ userId: user.id })).length > 0} />
+        <Suspense fallback={<OrdersCard shopMember={false} />}><OrdersCardFor userId={user.id} /></Suspense>
         <Card>
           <h2 className="font-medium text-ink">Submit a missing part</h2>
           <p className="mt-1 text-sm text-muted">Send its numbers and a spec sheet; a moderator checks it before it joins the catalog.</p>

@@ -1,16 +1,17 @@
 import { headers } from "next/headers";
 import Link from "next/link";
+import { Suspense } from "react";
 import { listBuilds } from "@/db/queries/builds";
 import { BuildCard } from "@/components/builds/build-card";
 import { PageTitle } from "@/components/ui/card";
 import { ButtonLink } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
+import { CardBones, LoadingRegion } from "@/components/ui/skeleton";
 import { getSessionUser } from "@/lib/auth/session";
 import { siteOrigin } from "@/lib/builds/site-url";
 import { buildSummary } from "@/lib/builds/to-json";
 import { listBuildsQuerySchema } from "@/lib/validation/builds";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Builds", description: "Saved imaging trains that reach focus; reference builds are checked by moderators." };
 
 // Drawn by us, so night mode has no white box.
@@ -25,15 +26,6 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
   const parsed = listBuildsQuerySchema.safeParse({ q: first(raw.q), reference: first(raw.reference), mine: first(raw.mine), cursor: first(raw.cursor) });
   const query = parsed.success ? parsed.data : listBuildsQuerySchema.parse({});
   const mine = query.mine && !!user;
-  const { items, nextCursor } = await listBuilds({ query: { ...query, mine }, ownerId: user?.id ?? null });
-  const origin = siteOrigin(await headers());
-  const params = (extra: Record<string, string | undefined>) => {
-    const p = new URLSearchParams();
-    const all = { q: query.q || undefined, reference: query.reference ? "1" : undefined, mine: mine ? "1" : undefined, ...extra };
-    for (const [k, v] of Object.entries(all)) if (v) p.set(k, v);
-    const s = p.toString();
-    return s ? `/builds?${s}` : "/builds";
-  };
 
   return (
     <div>
@@ -62,6 +54,29 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
       </form>
 
       {!parsed.success ? <p className="mb-4 text-sm text-bad">Some filters were not understood and were ignored.</p> : null}
+      {/* Keyed by the filters, so a new search shows the placeholder rather than the old list. */}
+      <Suspense key={JSON.stringify({ ...query, mine })} fallback={<LoadingRegion label="Loading the builds…"><CardBones count={6} className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3" /></LoadingRegion>}>
+        <BuildResults query={query} mine={mine} ownerId={user?.id ?? null} />
+      </Suspense>
+    </div>
+  );
+}
+
+type BuildsQuery = ReturnType<typeof listBuildsQuerySchema.parse>;
+
+/** The matching builds and the link to the next page: streamed after the page's title and filters. */
+async function BuildResults({ query, mine, ownerId }: { query: BuildsQuery; mine: boolean; ownerId: string | null }) {
+  const { items, nextCursor } = await listBuilds({ query: { ...query, mine }, ownerId });
+  const origin = siteOrigin(await headers());
+  const params = (extra: Record<string, string | undefined>) => {
+    const p = new URLSearchParams();
+    const all = { q: query.q || undefined, reference: query.reference ? "1" : undefined, mine: mine ? "1" : undefined, ...extra };
+    for (const [k, v] of Object.entries(all)) if (v) p.set(k, v);
+    const s = p.toString();
+    return s ? `/builds?${s}` : "/builds";
+  };
+  return (
+    <>
       {items.length ? (
         <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
           {items.map((row) => <BuildCard key={row.slug} build={buildSummary(row, origin)} showVisibility={mine} />)}
@@ -72,6 +87,6 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
         </div>
       )}
       {nextCursor ? <div className="mt-6 text-center"><ButtonLink href={params({ cursor: nextCursor })} variant="secondary">More builds</ButtonLink></div> : null}
-    </div>
+    </>
   );
 }

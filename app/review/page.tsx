@@ -1,26 +1,37 @@
 import Link from "next/link";
-import { redirect } from "next/navigation";
+import { Suspense } from "react";
 import { listPendingSubmissions } from "@/db/queries/submissions";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 import { ReviewActions } from "@/components/review/review-actions";
 import { PageTitle } from "@/components/ui/card";
-import { allowed, getSessionUser } from "@/lib/auth/session";
+import { CardBones, LoadingRegion } from "@/components/ui/skeleton";
+import { allowed } from "@/lib/auth/session";
+import { requireUser } from "@/lib/signed-in";
 import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 
 export const metadata = { title: "Review" };
-export const dynamic = "force-dynamic";
 
 export default async function ReviewPage() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?next=/review");
+  const user = await requireUser("/review");
   if (!allowed(user, { part: "review" })) return <p className="text-muted">Only moderators review submissions.</p>;
-  const { items: pending } = await listPendingSubmissions({ limit: 100 });
   return (
     <div className="max-w-5xl">
       <PageTitle title="Review queue" lead="Compare each submitted part with its spec sheet. Approved parts join the catalog and the planner at once.">
         <Link href="/review/builds" className="text-sm underline decoration-brass underline-offset-4">Builds to look at →</Link>
       </PageTitle>
+      <Suspense fallback={<LoadingRegion label="Loading the review queue…"><CardBones count={3} className="space-y-4" /></LoadingRegion>}>
+        <ReviewQueue />
+      </Suspense>
+    </div>
+  );
+}
+
+/** The parts waiting for a moderator, oldest first: streamed after the page's title. */
+async function ReviewQueue() {
+  const { items: pending } = await listPendingSubmissions({ limit: 100 });
+  return (
+    <>
       {pending.length === 0 ? <p className="rounded-lg border border-line bg-surface p-6 text-muted">Nothing waiting. Thank you.</p> : (
         <ul className="space-y-4">
           {pending.map(({ part, submitter }) => (
@@ -49,6 +60,6 @@ export default async function ReviewPage() {
           ))}
         </ul>
       )}
-    </div>
+    </>
   );
 }

@@ -5,6 +5,7 @@ import { requireDashboardShop } from "@/lib/shops/dashboard";
 import { shopNavFor } from "@/lib/shops/dashboard-nav";
 import { AppError } from "@/lib/errors";
 
+// Every dashboard page is per shop member; its try/catch must never meet the build's prerender bail-out.
 export const dynamic = "force-dynamic";
 
 function NotAMember({ message }: { message: string }) {

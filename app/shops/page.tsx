@@ -2,6 +2,7 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/card";
 import { listShops } from "@/db/queries/shops";
 
+// Reads only the database, no request data: without this the build would prerender a stale list.
 export const dynamic = "force-dynamic";
 export const metadata = { title: "Shops" };
 

@@ -1,34 +1,29 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
-import { useEffect, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import { useState } from "react";
+import { useDebounce } from "use-debounce";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS } from "@/lib/format";
 import { formatMm } from "@/lib/units";
+import { fetchJson } from "@/components/api-client";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "@/components/parts/interface-chip";
 
 type Owned = { part: ApiPart; quantity: number };
 
-async function json<T>(res: Response): Promise<T> {
-  const body = await res.json();
-  if (!res.ok) throw new Error(body.error?.message ?? `HTTP ${res.status}`);
-  return body;
-}
-
 export function GearEditor() {
   const qc = useQueryClient();
-  const gear = useQuery({ queryKey: ["gear"], queryFn: async () => json<{ items: Owned[] }>(await fetch("/api/v1/gear")) });
+  const gear = useQuery({ queryKey: ["gear"], queryFn: ({ signal }) => fetchJson<{ items: Owned[] }>("/api/v1/gear", { signal }) });
   const setQty = useMutation({
-    mutationFn: async (v: { partId: string; quantity: number }) => json(await fetch("/api/v1/gear", { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify(v) })),
+    mutationFn: (v: { partId: string; quantity: number }) => fetchJson("/api/v1/gear", { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify(v) }),
     onSuccess: () => qc.invalidateQueries({ queryKey: ["gear"] }),
   });
   const [q, setQ] = useState("");
-  const [debounced, setDebounced] = useState("");
-  useEffect(() => { const t = setTimeout(() => setDebounced(q.trim()), 250); return () => clearTimeout(t); }, [q]);
+  const [debounced] = useDebounce(q.trim(), 250);
   const search = useQuery({
     queryKey: ["gear-search", debounced], enabled: debounced.length >= 2,
-    queryFn: async () => json<{ items: ApiPart[] }>(await fetch(`/api/v1/parts?limit=12&q=${encodeURIComponent(debounced)}`)),
+    queryFn: ({ signal }) => fetchJson<{ items: ApiPart[] }>(`/api/v1/parts?limit=12&q=${encodeURIComponent(debounced)}`, { signal }),
   });
   const owned = new Map((gear.data?.items ?? []).map((o) => [o.part.id, o.quantity]));
 

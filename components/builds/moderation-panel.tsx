@@ -3,7 +3,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage, Input } from "@/components/ui/field";
-import { callBuildsApi } from "./api";
+import { callApi } from "@/components/api-client";
 
 /**
  * A moderator's controls for one build: endorse or withdraw, hide with a reason or show again,
@@ -21,7 +21,7 @@ export function ModerationPanel({ slug, endorsed, hidden, threads, compact = fal
 
   async function act(key: string, method: "POST" | "DELETE", path: string, body: unknown, done: string) {
     setBusy(key); setMessage(null);
-    const res = await callBuildsApi(method, `/api/v1/builds/${slug}${path}`, body);
+    const res = await callApi(method, `/api/v1/builds/${slug}${path}`, body);
     setBusy(null);
     if (!res.ok) { setMessage({ tone: "bad", text: res.fields ? Object.values(res.fields).flat()[0] ?? res.message : res.message }); return false; }
     setMessage({ tone: "ok", text: done });

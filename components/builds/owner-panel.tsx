@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
 import type { BuildVisibility } from "@/lib/validation/builds";
-import { callBuildsApi } from "./api";
+import { callApi } from "@/components/api-client";
 import { VisibilityChoice } from "./visibility-choice";
 
 /** The owner's controls: title, notes and visibility, or delete. Nothing else of a build changes. */
@@ -21,7 +21,7 @@ export function OwnerPanel({ slug, title, notes, visibility, deleteOnly = false 
   async function save(e: React.FormEvent) {
     e.preventDefault();
     setBusy(true); setMessage(null); setFields({});
-    const res = await callBuildsApi("PATCH", `/api/v1/builds/${slug}`, { title: form.title, notes: form.notes.trim() ? form.notes : null, visibility: form.visibility });
+    const res = await callApi("PATCH", `/api/v1/builds/${slug}`, { title: form.title, notes: form.notes.trim() ? form.notes : null, visibility: form.visibility });
     setBusy(false);
     if (!res.ok) { setMessage({ tone: "bad", text: res.message }); setFields(res.fields ?? {}); return; }
     setEditing(false);
@@ -32,7 +32,7 @@ export function OwnerPanel({ slug, title, notes, visibility, deleteOnly = false 
   async function remove() {
     if (!window.confirm("Delete this build? Its link will stop working for everyone.")) return;
     setBusy(true);
-    const res = await callBuildsApi("DELETE", `/api/v1/builds/${slug}`);
+    const res = await callApi("DELETE", `/api/v1/builds/${slug}`);
     setBusy(false);
     if (!res.ok) { setMessage({ tone: "bad", text: res.message }); return; }
     router.push(deleteOnly ? "/review/builds" : "/builds?mine=1");

@@ -5,7 +5,7 @@ import { Button, ButtonLink } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
 import { htmlSnippet, markdownSnippet } from "@/lib/builds/snippets";
 import type { BuildVisibility } from "@/lib/validation/builds";
-import { callBuildsApi } from "./api";
+import { callApi } from "@/components/api-client";
 import { SharePanel } from "./share-panel";
 import { VisibilityChoice } from "./visibility-choice";
 
@@ -36,7 +36,7 @@ export function SaveBuildButton({ request, solutionIndex, signedIn, defaultTitle
     e.preventDefault();
     if (!request) return;
     setBusy(true); setError(null);
-    const res = await callBuildsApi<{ slug: string; url: string }>("POST", "/api/v1/builds", {
+    const res = await callApi<{ slug: string; url: string }>("POST", "/api/v1/builds", {
       title: form.title, ...(form.notes.trim() ? { notes: form.notes } : {}), visibility: form.visibility, request, solutionIndex,
     });
     setBusy(false);

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { callBuildsApi } from "@/components/builds/api";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
 
@@ -13,7 +13,7 @@ export function BuyerActions({ id, canPay, paymentOpen, canCancel, total }: { id
 
   async function run(kind: string, method: "POST" | "DELETE", path: string, body?: unknown) {
     setBusy(kind); setError(null);
-    const res = await callBuildsApi<{ url?: string }>(method, path, body);
+    const res = await callApi<{ url?: string }>(method, path, body);
     if (!res.ok) { setBusy(null); setError(res.message); router.refresh(); return; }
     if (kind === "pay" && res.data.url) { window.location.assign(res.data.url); return; }
     setBusy(null);

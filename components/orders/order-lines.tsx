@@ -1,29 +1,24 @@
 import Link from "next/link";
+import { listAnd } from "@/lib/format";
 import { formatMoney } from "@/lib/payments/money";
 import type { QuoteJson } from "@/lib/payments/to-json";
+import { rowClass, Table, type TableColumn } from "@/components/ui/table";
 
 /** The quote's lines with the server's totals; with `stock`, the shop's shelf count beside each. */
 export function OrderLines({ quote, stock = false }: { quote: QuoteJson; stock?: boolean }) {
   const money = (n: number) => formatMoney(n, quote.currency);
   const shown = quote.lines.filter((l) => l.quantity > 0 || quote.status === "requested");
   const dropped = quote.lines.filter((l) => l.quantity === 0 && quote.status !== "requested");
+  const columns: TableColumn[] = [
+    { label: "Part" }, { label: "SKU", wide: true }, ...(stock ? [{ label: "On shelf", right: true }] : []),
+    { label: "Qty", right: true }, { label: "Unit", right: true, wide: true }, { label: "Amount", right: true },
+  ];
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full text-sm">
-        <caption className="sr-only">Parts in this quote</caption>
-        <thead className="border-b border-line text-left text-xs uppercase tracking-wide text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-2 font-medium">Part</th>
-            <th scope="col" className="hidden px-3 py-2 font-medium sm:table-cell">SKU</th>
-            {stock ? <th scope="col" className="px-3 py-2 text-right font-medium">On shelf</th> : null}
-            <th scope="col" className="px-3 py-2 text-right font-medium">Qty</th>
-            <th scope="col" className="hidden px-3 py-2 text-right font-medium sm:table-cell">Unit</th>
-            <th scope="col" className="px-4 py-2 text-right font-medium">Amount</th>
-          </tr>
-        </thead>
+    <Table columns={columns} caption="Parts in this quote"
+      after={dropped.length ? <p className="border-t border-line px-4 py-2 text-xs text-muted">Left out by the shop: {listAnd(dropped.map((l) => l.name))}.</p> : null}>
         <tbody>
           {shown.map((l) => (
-            <tr key={l.id} className="border-b border-line/70 last:border-0">
+            <tr key={l.id} className={rowClass}>
               <td className="px-4 py-2.5"><Link href={`/parts/${l.partSlug}`} className="font-medium text-ink underline-offset-4 hover:underline">{l.name}</Link>
                 <div className="text-xs text-muted"><span className="code sm:hidden">{l.sku} · {money(l.unitPriceCents)} each</span>{l.quantity !== l.requestedQuantity ? <span className="block">asked for {l.requestedQuantity}</span> : null}</div></td>
               <td className="code hidden px-3 py-2.5 text-muted sm:table-cell">{l.sku}</td>
@@ -39,9 +34,7 @@ export function OrderLines({ quote, stock = false }: { quote: QuoteJson; stock?:
           <tr><FootLabel stock={stock} className="py-2.5 font-semibold">{quote.status === "requested" ? "At the shop's listed prices, before its answer" : "Total"}</FootLabel>
             <td className="num px-4 py-2.5 text-right text-base font-semibold" data-testid="quote-total">{money(quote.totalCents)}</td></tr>
         </tfoot>
-      </table>
-      {dropped.length ? <p className="border-t border-line px-4 py-2 text-xs text-muted">Left out by the shop: {dropped.map((l) => l.name).join(", ")}.</p> : null}
-    </div>
+    </Table>
   );
 }
 

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { OrderStatus } from "@/db/schema-orders";
 import { formatMoney } from "@/lib/payments/money";
+import { rowClass, Table } from "@/components/ui/table";
 import { StatusBadge } from "./status-badge";
 
 export type OrderRow = {
@@ -14,21 +15,13 @@ const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: 
 export function OrdersTable({ rows, counterpartLabel, empty }: { rows: OrderRow[]; counterpartLabel: string; empty: React.ReactNode }) {
   if (!rows.length) return <div className="rounded-lg border border-dashed border-line px-6 py-10 text-center text-muted">{empty}</div>;
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-surface">
-      <table className="w-full min-w-[680px] text-sm">
-        <thead className="border-b border-line text-left text-xs uppercase tracking-wide text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-2 font-medium">Number</th>
-            <th scope="col" className="px-3 py-2 font-medium">For the train</th>
-            <th scope="col" className="px-3 py-2 font-medium">{counterpartLabel}</th>
-            <th scope="col" className="px-3 py-2 font-medium">Status</th>
-            <th scope="col" className="px-3 py-2 text-right font-medium">Total</th>
-            <th scope="col" className="px-4 py-2 text-right font-medium">Updated</th>
-          </tr>
-        </thead>
+    <Table className="min-w-[680px]" columns={[
+      { label: "Number" }, { label: "For the train" }, { label: counterpartLabel }, { label: "Status" },
+      { label: "Total", right: true }, { label: "Updated", right: true },
+    ]}>
         <tbody>
           {rows.map((r) => (
-            <tr key={r.id} className="border-b border-line/70 last:border-0 hover:bg-sunken/50">
+            <tr key={r.id} className={`${rowClass} hover:bg-sunken/50`}>
               <td className="px-4 py-2.5"><Link href={r.href} className="code font-medium text-ink underline decoration-brass underline-offset-4">{r.ref}</Link></td>
               <td className="max-w-[18rem] truncate px-3 py-2.5" title={r.buildTitle}>{r.buildTitle}<span className="text-xs text-muted"> · {r.lineCount} part{r.lineCount === 1 ? "" : "s"}</span></td>
               <td className="px-3 py-2.5">{r.counterpart}</td>
@@ -38,7 +31,6 @@ export function OrdersTable({ rows, counterpartLabel, empty }: { rows: OrderRow[
             </tr>
           ))}
         </tbody>
-      </table>
-    </div>
+    </Table>
   );
 }

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
-import { callBuildsApi } from "@/components/builds/api";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
 import { formatMoney, inputToMinor, minorToInput, quoteTotal } from "@/lib/payments/money";
@@ -42,7 +42,7 @@ export function QuoteEditor({ quote }: { quote: QuoteJson }) {
     if (shippingMinor === null) local.shippingCents = ["A price like 8.00 (0 for free)"];
     if (Object.keys(local).length) { setFields(local); setMessage({ tone: "bad", text: "Some fields need attention." }); return; }
     setBusy(true);
-    const res = await callBuildsApi("POST", `/api/v1/quotes/${quote.id}/answer`, {
+    const res = await callApi("POST", `/api/v1/quotes/${quote.id}/answer`, {
       lines: rows.map((r, i) => ({ id: r.id, quantity: parsed[i].quantity, unitPriceCents: parsed[i].unitPriceCents })),
       shippingCents: shippingMinor, note: note.trim() || undefined, validDays: Number(days),
     });

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { callBuildsApi } from "@/components/builds/api";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, inputClass } from "@/components/ui/field";
 import { formatMoney } from "@/lib/payments/money";
@@ -22,7 +22,7 @@ export function QuoteRequestForm({ build, offers, neededCount }: { build: string
   async function send(e: React.FormEvent) {
     e.preventDefault();
     setBusy(true); setError(null);
-    const res = await callBuildsApi<{ id: string }>("POST", "/api/v1/quotes", { build, shop, note: note.trim() || undefined });
+    const res = await callApi<{ id: string }>("POST", "/api/v1/quotes", { build, shop, note: note.trim() || undefined });
     if (!res.ok) { setBusy(false); setError({ message: res.message, fields: res.fields }); return; }
     router.push(`/quotes/${res.data.id}?sent=1`);
   }

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { callBuildsApi } from "@/components/builds/api";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
 
@@ -15,7 +15,7 @@ export function ShopOrderActions({ id, canShip, canRefund, canDecline, total }: 
 
   async function run(kind: string, path: string, body: unknown, done: string) {
     setBusy(kind); setMessage(null); setFields({});
-    const res = await callBuildsApi("POST", path, body);
+    const res = await callApi("POST", path, body);
     setBusy(null);
     if (!res.ok) { setMessage({ tone: "bad", text: res.message }); setFields(res.fields ?? {}); return; }
     setMessage({ tone: "ok", text: done });

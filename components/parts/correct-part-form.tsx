@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, type Resolver } from "react-hook-form";
 import { partPatchSchema, type PartPatch } from "@/lib/validation/submissions";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
 
@@ -25,14 +26,13 @@ export function CorrectPartForm({ slug, initial }: { slug: string; initial: Numb
   async function onSubmit(values: Numbers) {
     const changed = Object.fromEntries(Object.entries(values).filter(([k]) => dirtyFields[k as keyof Numbers]));
     if (!Object.keys(changed).length) { setMessage({ tone: "bad", text: "Nothing changed." }); return; }
-    const res = await fetch(`/api/v1/parts/${slug}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(changed) });
-    const body = await res.json();
+    const res = await callApi<{ recheck: { queued: number } }>("PATCH", `/api/v1/parts/${encodeURIComponent(slug)}`, changed);
     if (!res.ok) {
-      for (const [k, v] of Object.entries((body.error?.fields ?? {}) as Record<string, string[]>)) setError(k as keyof Numbers, { message: v[0] });
-      setMessage({ tone: "bad", text: body.error?.message ?? "The correction was not saved." });
+      for (const [k, v] of Object.entries(res.fields ?? {})) setError(k as keyof Numbers, { message: v[0] });
+      setMessage({ tone: "bad", text: res.message });
       return;
     }
-    const n = body.recheck.queued as number;
+    const n = res.data.recheck.queued;
     setMessage({ tone: "ok", text: n ? `Saved. ${n} build${n === 1 ? "" : "s"} that use it are being re-checked; their pages show the verdict within seconds.` : "Saved. No saved build uses this part." });
     router.refresh();
   }

@@ -1,5 +1,6 @@
 "use client";
 import { useState } from "react";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 
 /** "I own this": adds one to the signed-in user's gear. */
@@ -9,9 +10,9 @@ export function OwnButton({ partId, initialQuantity }: { partId: string; initial
   const [busy, setBusy] = useState(false);
   async function change(next: number) {
     setBusy(true); setError(null);
-    const res = await fetch("/api/v1/gear", { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ partId, quantity: next }) });
+    const res = await callApi("PUT", "/api/v1/gear", { partId, quantity: next });
     setBusy(false);
-    if (!res.ok) { setError((await res.json()).error?.message ?? "That did not work."); return; }
+    if (!res.ok) { setError(res.message); return; }
     setQuantity(next);
   }
   return (

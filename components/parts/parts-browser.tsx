@@ -5,12 +5,14 @@ import {
 } from "@tanstack/react-table";
 import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
-import { useEffect, useMemo, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import { useMemo, useState } from "react";
+import { useDebouncedCallback } from "use-debounce";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS, formatGrams } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { PART_KINDS } from "@/lib/validation/parts";
+import { fetchJson } from "@/components/api-client";
 import { inputClass } from "@/components/ui/field";
 import { InterfaceChip } from "./interface-chip";
 
@@ -39,15 +41,14 @@ export function PartsBrowser() {
   const iface = params.get("interface") ?? "";
   const [sorting, setSorting] = useState<SortingState>([]);
 
+  // Three plain string parameters through Next's router; nuqs's adapter would load on every page (6.3 KB gzip, planner's budget).
   function setParam(name: string, value: string) {
     const next = new URLSearchParams(params.toString());
     if (value) next.set(name, value); else next.delete(name);
     router.replace(`${pathname}${next.size ? `?${next}` : ""}`, { scroll: false });
   }
-  useEffect(() => {
-    const t = setTimeout(() => { if ((params.get("q") ?? "") !== q) setParam("q", q); }, 250);
-    return () => clearTimeout(t);
-  });
+  // The address follows the search box once typing pauses.
+  const pushQ = useDebouncedCallback((value: string) => { if ((params.get("q") ?? "") !== value) setParam("q", value); }, 250);
 
   const query = useInfiniteQuery({
     queryKey: ["parts", params.get("q") ?? "", kind, iface],
@@ -58,9 +59,7 @@ export function PartsBrowser() {
       if (kind) sp.set("kind", kind);
       if (iface) sp.set("interface", iface);
       if (pageParam) sp.set("cursor", pageParam);
-      const res = await fetch(`/api/v1/parts?${sp}`, { signal });
-      if (!res.ok) throw new Error((await res.json()).error?.message ?? `The catalog answered ${res.status}`);
-      return res.json();
+      return fetchJson<Page>(`/api/v1/parts?${sp}`, { signal });
     },
     getNextPageParam: (last) => last.nextCursor ?? undefined,
   });
@@ -71,7 +70,7 @@ export function PartsBrowser() {
     <div className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-[2fr_1fr_1fr]" role="search">
         <label className="block"><span className="sr-only">Search</span>
-          <input className={inputClass} placeholder="Search maker, model, thread…" value={q} onChange={(e) => setQ(e.target.value)} />
+          <input className={inputClass} placeholder="Search maker, model, thread…" value={q} onChange={(e) => { setQ(e.target.value); pushQ(e.target.value); }} />
         </label>
         <label className="block"><span className="sr-only">Kind</span>
           <select className={inputClass} value={kind} onChange={(e) => setParam("kind", e.target.value)}>

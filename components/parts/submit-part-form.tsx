@@ -7,6 +7,7 @@ import { KIND_LABELS } from "@/lib/format";
 import { INTERFACES, interfaceLabel } from "@/lib/interfaces";
 import { FILTER_SIZES, OPTICS_ROLES, PART_KINDS, partFormSchema, type PartInput } from "@/lib/validation/parts";
 import { humanIssue } from "@/lib/validation/messages";
+import { apiRequest } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, inputClass } from "@/components/ui/field";
 
@@ -36,17 +37,17 @@ export function SubmitPartForm() {
     const body = new FormData();
     body.set("part", JSON.stringify(values));
     body.set("specSheet", file);
-    const res = await fetch("/api/v1/submissions", { method: "POST", body });
-    const json = await res.json();
-    if (!res.ok) {
-      const fields = Object.entries((json.error?.fields ?? {}) as Record<string, string[]>);
+    const res = await apiRequest<{ slug: string; probableDuplicateOf: string | null }>("/api/v1/submissions", { method: "POST", body });
+    if (!res.ok || !res.data) {
+      const fields = Object.entries(res.ok ? {} : res.fields ?? {});
       for (const [path, msgs] of fields) {
         if (path === "specSheet") setFileError(msgs[0]); else setError(path as never, { message: msgs[0] });
       }
       // Each field's message shows beside it; the top line only points there, so nothing reads twice.
-      setResult({ ok: false, text: fields.length ? "Nothing was sent yet: see the marked fields below." : json.error?.message ?? "The submission failed." });
+      setResult({ ok: false, text: fields.length ? "Nothing was sent yet: see the marked fields below." : res.ok ? "The server sent an answer that is not JSON." : res.message });
       return;
     }
+    const json = res.data;
     setResult({ ok: true, slug: json.slug, text: json.probableDuplicateOf
       ? `Thank you. A moderator will check it; it looks like "${json.probableDuplicateOf}" already in the catalog, so they will compare the two.`
       : "Thank you. A moderator will check it; you will get an e-mail either way." });

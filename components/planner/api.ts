@@ -1,33 +1,8 @@
 "use client";
-// Talking to the JSON API from the planner: one error type that keeps the server's words.
+// The planner's reads of the catalog API (through the shared client in components/api-client).
 import { useQuery } from "@tanstack/react-query";
-import type { ApiPart } from "@/lib/catalog/rows";
-
-export class ApiError extends Error {
-  constructor(message: string, readonly status: number, readonly code: string, readonly fields?: Record<string, string[]>) {
-    super(message);
-  }
-}
-
-export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(url, init);
-  } catch (err) {
-    if ((err as Error).name === "AbortError") throw err;
-    throw new ApiError("Trainyard could not be reached. Check the connection and try again.", 0, "network");
-  }
-  const text = await res.text();
-  let body: unknown = null;
-  try { body = text ? JSON.parse(text) : null; } catch { /* not JSON: described below */ }
-  if (!res.ok) {
-    const e = (body as { error?: { code?: string; message?: string; fields?: Record<string, string[]> } } | null)?.error;
-    const message = e?.message ?? (res.status >= 500 ? `The server had a problem (${res.status}). Try again in a moment.` : `The server answered ${res.status}.`);
-    throw new ApiError(message, res.status, e?.code ?? String(res.status), e?.fields);
-  }
-  if (body === null) throw new ApiError("The server sent an answer that is not JSON.", res.status, "bad_json");
-  return body as T;
-}
+import { ApiError, fetchJson } from "@/components/api-client";
+import type { ApiPart } from "@/lib/catalog/part-json";
 
 export type PartsPage = { items: ApiPart[]; nextCursor: string | null };
 

@@ -5,6 +5,7 @@ import type { Nearest, Step } from "@/lib/solver";
 import { SEGMENT_FILL } from "./segment-fill";
 import type { LengthUnit } from "@/lib/units";
 import { tickLabel, ticks } from "./ruler";
+import { RulerAxis } from "./ruler-axis";
 import { signed } from "./train-model";
 import { useWidth } from "./use-width";
 import { MM_PER_INCH } from "@/lib/optics";
@@ -58,14 +59,7 @@ export function BudgetLoupe({ steps, sensorMm, targetMm: T, toleranceMm: tol, fi
             <text x={x(n) + (n < T ? -4 : 4)} y={50} textAnchor={n < T ? "end" : "start"} fontSize="10" fill="var(--c-muted)" className="num">reachable {u(n).toFixed(d)}</text>
           </g>
         ) : null)}
-        <line x1={pad} x2={W - pad} y1={54} y2={54} stroke="var(--c-ink)" strokeOpacity={0.7} />
-        {t.minor.map((v) => <line key={`m${v}`} x1={x(v)} x2={x(v)} y1={54} y2={58} stroke="var(--c-muted)" />)}
-        {t.major.map((v) => (
-          <g key={`M${v}`}>
-            <line x1={x(v)} x2={x(v)} y1={54} y2={61} stroke="var(--c-ink)" strokeOpacity={0.8} />
-            <text x={x(v)} y={73} textAnchor="middle" fontSize="10" fill="var(--c-text)" className="num">{tickLabel(v, unit, t.step)}</text>
-          </g>
-        ))}
+        <RulerAxis x={x} from={pad} to={W - pad} y={54} ticks={t} unit={unit} major={7} />
         <text x={x(T)} y={88} textAnchor="middle" fontSize="10" fill="var(--c-ink)" className="num">target {u(T).toFixed(d)} · window {u(T - tol).toFixed(d)}–{u(T + tol).toFixed(d)}</text>
         {off ? (
           <text x={off < 0 ? pad : W - pad} y={11} textAnchor={off < 0 ? "start" : "end"} fontSize="11" fontWeight={600} fill={mark} className="num">

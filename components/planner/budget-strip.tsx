@@ -7,7 +7,8 @@ import type { Nearest } from "@/lib/solver";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { BudgetLoupe, loupeRange } from "./budget-loupe";
 import { SEGMENT_FILL } from "./segment-fill";
-import { tickLabel, ticks } from "./ruler";
+import { ticks } from "./ruler";
+import { RulerAxis } from "./ruler-axis";
 import { signed } from "./train-model";
 import { useWidth } from "./use-width";
 import { MM_PER_INCH } from "@/lib/optics";
@@ -85,14 +86,7 @@ export function BudgetStrip({ chain, names, targetMm, toleranceMm, filterShiftMm
             <text x={x(n) + (i ? 7 : -7)} y={120} textAnchor={i ? "start" : "end"} fontSize="10" fill="var(--c-muted)" className="num">{short(n)}</text>
           </g>
         ))}
-        <line x1={left} x2={W - right} y1={86} y2={86} stroke="var(--c-ink)" strokeOpacity={0.7} />
-        {t.minor.map((v) => <line key={`m${v}`} x1={x(v)} x2={x(v)} y1={86} y2={90} stroke="var(--c-muted)" />)}
-        {t.major.map((v) => (
-          <g key={`M${v}`}>
-            <line x1={x(v)} x2={x(v)} y1={86} y2={94} stroke="var(--c-ink)" strokeOpacity={0.8} />
-            <text x={x(v)} y={105} textAnchor="middle" fontSize="10" fill="var(--c-text)" className="num">{tickLabel(v, unit, t.step)}</text>
-          </g>
-        ))}
+        <RulerAxis x={x} from={left} to={W - right} y={86} ticks={t} unit={unit} />
         {loupe ? <path d={`M${x(loupe[0])},108 v4 H${x(loupe[1])} v-4`} fill="none" stroke="var(--c-muted)" strokeWidth={1} /> : null}
         <g data-testid="sensor-marker">
           <line x1={x(D)} x2={x(D)} y1={28} y2={122} stroke={mark} strokeWidth={2.5} />

@@ -1,10 +1,11 @@
 "use client";
 // One chosen part in the left column: its name, faces and the numbers that matter here.
 import type { ReactNode } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { formatLength, type LengthUnit } from "@/lib/units";
 import { getInterface, interfaceHue, interfaceLabel } from "@/lib/interfaces";
-import { ApiError, usePart } from "./api";
+import { ApiError } from "@/components/api-client";
+import { usePart } from "./api";
 import { useLengthUnit } from "./length-unit";
 import { roleOf } from "./part-combobox";
 

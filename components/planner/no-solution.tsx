@@ -1,5 +1,6 @@
 "use client";
 // When nothing lands in the window: why, the nearest reachable distances, and what to change.
+import { listAnd } from "@/lib/format";
 import Link from "next/link";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import type { Change } from "@/lib/planner/what-to-change";
@@ -44,7 +45,7 @@ function Remedies({ result, unit, onApply }: { result: PlanResponse; unit: Lengt
       <p className="mt-2">{single ? "Each of these makes the train land in the window:" : "No single change does it; each of these pairs does:"}</p>
       <ul className="mt-1.5 space-y-1.5" data-testid="remedies">
         {remedies.map((r, i) => {
-          const text = r.changes.map((c) => changeText(result, c)).join(" and ");
+          const text = listAnd(r.changes.map((c) => changeText(result, c)));
           const patch: RemedyPatch = { removeStations: r.changes.filter((c) => c.kind === "remove-station").map((c) => (c as { index: number }).index) };
           for (const c of r.changes) { if (c.kind === "replace-camera") patch.camera = c.id; if (c.kind === "replace-corrector") patch.corrector = c.id; }
           return (

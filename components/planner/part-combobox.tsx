@@ -1,15 +1,16 @@
 "use client";
 // Search-as-you-type over the catalog, as an ARIA 1.2 combobox: arrows move, Enter picks,
 // Escape closes (and clears when already closed).
+// Hand-written, not Downshift's useCombobox: that adds 13.8 KB gzip to the planner's first-load JS (231 of a 250 KB budget).
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useId, useMemo, useRef, useState } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import { useDebounce } from "use-debounce";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import { KIND_LABELS } from "@/lib/format";
 import { interfaceLabel } from "@/lib/interfaces";
 import { formatMm } from "@/lib/units";
 import { inputClass } from "@/components/ui/field";
 import { searchParts } from "./api";
-import { useDebounced } from "./use-debounced";
 
 type Props = {
   label: string;
@@ -50,7 +51,7 @@ export function PartCombobox({ label, kinds, placeholder, accept, onPick, autoFo
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
   const inputRef = useRef<HTMLInputElement>(null);
-  const q = useDebounced(text, 220);
+  const [q] = useDebounce(text, 220);
 
   const query = useQuery({
     queryKey: ["parts-search", kinds.join("+"), q],

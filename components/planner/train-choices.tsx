@@ -1,7 +1,7 @@
 "use client";
 // The left column: the train's choices as a vertical rail, sky at the top, sensor at the bottom.
 import { useCallback, useState, type ReactNode } from "react";
-import type { ApiPart } from "@/lib/catalog/rows";
+import type { ApiPart } from "@/lib/catalog/part-json";
 import type { PlanState } from "@/lib/planner/url-state";
 import { MAX_STATIONS } from "@/lib/planner/url-state";
 import { useCorrectorJoins, usePart } from "./api";

@@ -1,7 +1,7 @@
 "use client";
 // The train as a flow diagram: sky on the left, sensor on the right, one node per item,
 // each joint labelled with its interface and which side is male.
-import { ReactFlow, type Viewport } from "@xyflow/react";
+import { ReactFlow, type ReactFlowProps, type Viewport } from "@xyflow/react";
 import { useEffect, useMemo, useState } from "react";
 import { TrainList } from "@/components/builds/train-list";
 import type { LengthUnit } from "@/lib/units";
@@ -57,6 +57,13 @@ function viewportFor(l: Layout, W: number, H: number) {
   return { viewport: { x, y, zoom }, overflow };
 }
 
+/** A drawing to read and pan, not to edit: nothing drags, connects, selects or takes focus; the page keeps its scroll. */
+const LOOK_ONLY = {
+  minZoom: 0.3, maxZoom: 2, panOnDrag: true,
+  nodesDraggable: false, nodesConnectable: false, elementsSelectable: false, nodesFocusable: false, edgesFocusable: false,
+  zoomOnScroll: false, zoomOnDoubleClick: false, preventScrolling: false,
+} satisfies Partial<ReactFlowProps>;
+
 export function TrainDiagram({ train, unit, label, warnings }: { train: Train; unit: LengthUnit; label: string; warnings?: Record<string, string> }) {
   const connected = train.connected;
   const layout = useMemo(() => layoutTrain(train, unit, warnings), [train, unit, warnings]);
@@ -86,17 +93,7 @@ export function TrainDiagram({ train, unit, label, warnings }: { train: Train; u
           edgeTypes={edgeTypes}
           viewport={viewport}
           onViewportChange={setViewport}
-          minZoom={0.3}
-          maxZoom={2}
-          nodesDraggable={false}
-          nodesConnectable={false}
-          elementsSelectable={false}
-          nodesFocusable={false}
-          edgesFocusable={false}
-          zoomOnScroll={false}
-          zoomOnDoubleClick={false}
-          preventScrolling={false}
-          panOnDrag
+          {...LOOK_ONLY}
         />
       </div>
       <figcaption className="mt-1.5 hidden text-xs text-muted sm:block">

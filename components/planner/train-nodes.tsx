@@ -41,15 +41,25 @@ function Mark({ data }: { data: TrainNodeData }) {
   return <span role="img" title={data.warning} aria-label={`Warning: ${data.warning}`} className="absolute -right-2 -top-3 z-10 rounded-full bg-warn px-1.5 text-[10px] font-bold leading-4 text-bg">▲</span>;
 }
 
+/** Every item's box: to scale, its hidden joint handles and warning mark; the shape and fill say what it is. */
+function ItemBox({ data, kind, shape, style, children }: {
+  data: TrainNodeData; kind: string; shape: string; style?: React.CSSProperties; children: React.ReactNode;
+}) {
+  return (
+    <div data-testid="train-node" data-role={kind} style={{ ...box(data), ...style }} className={`relative flex items-center justify-center ${shape}`}>
+      <Ends /><Mark data={data} />
+      {children}
+    </div>
+  );
+}
+
 function OpticNode({ data }: NodeProps<TrainNode>) {
   const { item, unit } = data;
   const note = item.role === "telescope" ? "telescope" : item.lengthMm > 0 ? `${formatLength(item.lengthMm, unit)} body` : "back focus from here";
   return (
-    <div data-testid="train-node" data-role={item.role} style={box(data)}
-      className="relative flex items-center justify-center rounded-l-[999px] rounded-r-md border-2 border-glass bg-[color-mix(in_srgb,var(--c-glass)_14%,var(--c-surface))] pl-4">
-      <Ends /><Mark data={data} />
+    <ItemBox data={data} kind={item.role} shape="rounded-l-[999px] rounded-r-md border-2 border-glass bg-[color-mix(in_srgb,var(--c-glass)_14%,var(--c-surface))] pl-4">
       <Caption item={item} unit={unit} lengthNote={note} />
-    </div>
+    </ItemBox>
   );
 }
 
@@ -59,32 +69,26 @@ const THREADS = { backgroundImage: `${TEETH}, ${TEETH}`, backgroundSize: "100% 5
 
 function ConnectorNode({ data }: NodeProps<TrainNode>) {
   return (
-    <div data-testid="train-node" data-role="connector" style={{ ...box(data), ...THREADS }}
-      className="relative flex items-center justify-center rounded-[3px] border border-ink/60 bg-surface">
-      <Ends /><Mark data={data} />
+    <ItemBox data={data} kind="connector" style={THREADS} shape="rounded-[3px] border border-ink/60 bg-surface">
       <div className="rounded bg-surface/90 py-0.5"><Caption item={data.item} unit={data.unit} /></div>
-    </div>
+    </ItemBox>
   );
 }
 
 function StationNode({ data }: NodeProps<TrainNode>) {
   return (
-    <div data-testid="train-node" data-role="station" style={box(data)}
-      className="relative flex items-center justify-center rounded-md border-2 border-ink bg-station shadow-[inset_0_0_0_3px_var(--c-surface)]">
-      <Ends /><Mark data={data} />
+    <ItemBox data={data} kind="station" shape="rounded-md border-2 border-ink bg-station shadow-[inset_0_0_0_3px_var(--c-surface)]">
       <Caption item={data.item} unit={data.unit} />
-    </div>
+    </ItemBox>
   );
 }
 
 function CameraNode({ data }: NodeProps<TrainNode>) {
   return (
-    <div data-testid="train-node" data-role="camera" style={box(data)}
-      className="relative flex items-center justify-center rounded-l-sm rounded-r-[22px] border-2 border-ink bg-sunken pr-3">
-      <Ends /><Mark data={data} />
+    <ItemBox data={data} kind="camera" shape="rounded-l-sm rounded-r-[22px] border-2 border-ink bg-sunken pr-3">
       <Caption item={data.item} unit={data.unit} />
       <span aria-hidden className="absolute bottom-3 right-3 top-3 w-[3px] rounded bg-ok" title="sensor" />
-    </div>
+    </ItemBox>
   );
 }
 

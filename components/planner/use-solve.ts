@@ -2,8 +2,8 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import type { SolveApiRequest } from "@/lib/planner/url-state";
-import { fetchJson } from "./api";
-import { useDebounced } from "./use-debounced";
+import { fetchJson } from "@/components/api-client";
+import { useDebounce } from "use-debounce";
 
 /**
  * POST /api/v1/solve whenever the question settles (debounced; the first question goes at
@@ -11,7 +11,7 @@ import { useDebounced } from "./use-debounced";
  */
 export function useSolve(request: SolveApiRequest | null) {
   const body = request ? JSON.stringify(request) : null;
-  const settled = useDebounced(body, 350);
+  const [settled] = useDebounce(body, 350);
   const query = useQuery({
     queryKey: ["solve", settled],
     queryFn: ({ signal }) => fetchJson<PlanResponse>("/api/v1/solve", {

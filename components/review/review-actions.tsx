@@ -1,6 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { callApi } from "@/components/api-client";
 import { Button } from "@/components/ui/button";
 import { inputClass } from "@/components/ui/field";
 
@@ -11,9 +12,9 @@ export function ReviewActions({ id }: { id: string }) {
   const [busy, setBusy] = useState(false);
   async function decide(decision: "approve" | "reject") {
     setBusy(true); setError(null);
-    const res = await fetch(`/api/v1/submissions/${id}/review`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ decision, reason: reason || undefined }) });
+    const res = await callApi("POST", `/api/v1/submissions/${id}/review`, { decision, reason: reason || undefined });
     setBusy(false);
-    if (!res.ok) { const j = await res.json(); setError(j.error?.fields?.reason?.[0] ?? j.error?.message ?? "That did not work."); return; }
+    if (!res.ok) { setError(res.fields?.reason?.[0] ?? res.message); return; }
     router.refresh();
   }
   return (

@@ -3,7 +3,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
-import { fetchJson } from "@/components/planner/api";
+import { fetchJson } from "@/components/api-client";
 
 export function AcceptInvitation({ id, shopName }: { id: string; shopName: string }) {
   const router = useRouter();

@@ -3,7 +3,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage, Input } from "@/components/ui/field";
-import { fetchJson } from "@/components/planner/api";
+import { fetchJson } from "@/components/api-client";
 
 type Key = { id: string; name: string; start: string; createdAt: string | Date; lastUsedAt: string | Date | null };
 

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
-import { ApiError, fetchJson } from "@/components/planner/api";
+import { ApiError, fetchJson } from "@/components/api-client";
 import type { Preview } from "@/lib/shops/csv";
 import { formatMoney } from "@/lib/shops/money";
 import { LIMITS } from "@/lib/validation/shops";

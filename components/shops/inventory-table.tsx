@@ -7,7 +7,7 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
 import { PartCombobox } from "@/components/planner/part-combobox";
-import { fetchJson, ApiError } from "@/components/planner/api";
+import { ApiError, fetchJson } from "@/components/api-client";
 import { KIND_LABELS } from "@/lib/format";
 import { formatMoney, minorDigits } from "@/lib/shops/money";
 import { inventoryItemSchema } from "@/lib/validation/shops";

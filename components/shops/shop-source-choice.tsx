@@ -2,7 +2,7 @@
 // The planner's "Draw the parts from" option for one shop's stock, with "what I own first".
 import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
-import { fetchJson } from "@/components/planner/api";
+import { fetchJson } from "@/components/api-client";
 
 type ShopListItem = { slug: string; name: string; currency: string; inStock: number; location: string | null };
 type Patch = { source?: "shop"; shop?: string | null; shopOwned?: boolean };

@@ -3,7 +3,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage, Input } from "@/components/ui/field";
-import { fetchJson } from "@/components/planner/api";
+import { fetchJson } from "@/components/api-client";
 
 type Member = { id: string; name: string; email: string; role: "owner" | "staff" };
 type Invite = { id: string; email: string; expiresAt: string | Date };

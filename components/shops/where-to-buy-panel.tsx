@@ -1,7 +1,7 @@
 "use client";
 // The planner's "Where to buy": which shops can supply the connecting parts still to buy.
 import { useQuery } from "@tanstack/react-query";
-import { fetchJson } from "@/components/planner/api";
+import { fetchJson } from "@/components/api-client";
 import type { ShopOffer } from "@/lib/shops/where-to-buy";
 import { WhereToBuyOffers } from "./where-to-buy-offers";
 

@@ -4,7 +4,6 @@ import { db } from "@/db/client";
 import { escapeLike } from "@/db/queries/like";
 import { parts } from "@/db/schema";
 import { nameCompactSql, searchCompactSql, searchWordsSql } from "@/db/search-sql";
-import { rowToApiPart } from "@/lib/catalog/rows";
 import type { ParsedSearch } from "@/lib/search/normalize";
 
 /** The query as a prefix tsquery: words AND-ed, a synonym's spellings OR-ed, phrases in order. */
@@ -18,6 +17,7 @@ export function toTsQuery(search: ParsedSearch): string {
  * first: a name that holds the whole query, then one that ends with it, then trigram
  * similarity and full-text rank. The word tests use the trigram indexes on the normalised
  * words (LIKE and regular expressions both can). Paged by offset, since the order is by score.
+ * Rows with their score; lib/catalog/part-json.ts shapes them for the API.
  */
 export async function searchApprovedParts({ search, where, limit, offset }: { search: ParsedSearch; where: SQL[]; limit: number; offset: number }) {
   const words = searchWordsSql(parts);
@@ -39,7 +39,7 @@ export async function searchApprovedParts({ search, where, limit, offset }: { se
     .limit(limit + 1).offset(offset);
   const page = rows.slice(0, limit);
   return {
-    items: page.map((r) => ({ ...rowToApiPart(r.part), matchScore: Math.round(r.score * 1000) / 1000 })),
+    items: page.map((r) => ({ row: r.part, matchScore: r.score })),
     nextOffset: rows.length > limit ? offset + limit : null,
   };
 }

@@ -2,7 +2,6 @@ import "server-only";
 import { and, asc, eq, gt, inArray, or, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db/client";
 import { catalogState, parts } from "@/db/schema";
-import { rowToApiPart } from "@/lib/catalog/rows";
 import { parseSearch } from "@/lib/search/normalize";
 import { searchApprovedParts } from "./part-search";
 import { AppError } from "@/lib/errors";
@@ -12,7 +11,8 @@ import { decodeCursor, encodeCursor, type ListPartsQuery } from "@/lib/validatio
 
 /**
  * Approved parts, filtered. With a search: best match first (db/queries/part-search.ts),
- * paged by offset; without: keyset-paged by slug.
+ * paged by offset; without: keyset-paged by slug. Rows (with the search's match score, else
+ * null) and the next page's cursor; lib/catalog/part-json.ts shapes them for the API.
  */
 export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
   const where: SQL[] = [];
@@ -31,7 +31,7 @@ export async function listApprovedParts({ query }: { query: ListPartsQuery }) {
   const rows = await db.select().from(parts).where(and(...where)).orderBy(asc(parts.slug)).limit(query.limit + 1);
   const page = rows.slice(0, query.limit);
   return {
-    items: page.map(rowToApiPart),
+    items: page.map((row) => ({ row, matchScore: null })),
     nextCursor: rows.length > query.limit ? encodeCursor(page[page.length - 1].slug) : null,
   };
 }

@@ -1,7 +1,5 @@
-// Mapping between the catalog's validated shape and its table row, and to the solver's Part.
+// Mapping between the catalog's validated shape and its table row (the API's JSON: part-json.ts).
 import type { PartParsed, PartSpecs } from "@/lib/validation/parts";
-import { sensorDiagonalMm } from "@/lib/validation/parts";
-import type { Gender } from "@/lib/solver/types";
 
 export type PartRowLike = {
   id: string; slug: string; kind: string; maker: string; model: string; description: string | null;
@@ -20,25 +18,3 @@ export function partToRow(p: PartParsed) {
     listPriceCents: p.listPriceCents ?? null, specs: p.specs,
   };
 }
-
-export type PortOut = { interface: string; gender: Gender } | null;
-
-function port(i: string | null, g: string | null): PortOut {
-  return i && (g === "male" || g === "female") ? { interface: i, gender: g } : null;
-}
-
-/** The public JSON shape of a part: kind-specific numbers at top level. */
-export function rowToApiPart(r: PartRowLike) {
-  const specs = r.specs ?? {};
-  const focalRatio = specs.focalLengthMm && specs.apertureMm ? specs.focalLengthMm / specs.apertureMm : undefined;
-  return {
-    id: r.id, slug: r.slug, kind: r.kind, name: `${r.maker} ${r.model}`, maker: r.maker, model: r.model,
-    description: r.description, front: port(r.frontInterface, r.frontGender), rear: port(r.rearInterface, r.rearGender),
-    lengthMm: r.lengthMm, adjustMm: r.adjustMm, reversible: r.reversible, clearApertureMm: r.clearApertureMm,
-    weightG: r.weightG, listPriceCents: r.listPriceCents, status: r.status,
-    ...specs,
-    ...(focalRatio ? { focalRatio: Math.round(focalRatio * 100) / 100 } : {}),
-    ...(sensorDiagonalMm(specs) !== undefined ? { sensorDiagonalMm: Math.round(sensorDiagonalMm(specs)! * 100) / 100 } : {}),
-  };
-}
-export type ApiPart = ReturnType<typeof rowToApiPart>;

@@ -4,7 +4,7 @@ import "server-only";
 // thread the focuser does not have.
 import { getPartOrThrow } from "@/db/queries/parts";
 import { AppError } from "@/lib/errors";
-import { catalogConnectors } from "./run-plan";
+import { catalogConnectors } from "./catalog-cache";
 import { solveLink } from "./telescope-link";
 
 export type CorrectorJoin = { slug: string; joins: boolean; adapters: number };
@@ -12,7 +12,7 @@ export type CorrectorJoin = { slug: string; joins: boolean; adapters: number };
 type Joins = { telescope: string; correctors: CorrectorJoin[] };
 
 // One link solve per corrector is too much to repeat on every planner load: keep the answer per
-// telescope until the catalog changes (the catalog cache in run-plan.ts is keyed the same way).
+// telescope until the catalog changes (the catalog cache in catalog-cache.ts is keyed the same way).
 const joinsCache = new Map<string, { version: number; joins: Joins }>();
 
 export async function correctorJoins({ telescope }: { telescope: string }): Promise<Joins> {

@@ -18,3 +18,23 @@ export function solveLink(telescope: PartRowLike, corrector: PartRowLike, parts:
   const { scope, end } = linkEnds(telescope, corrector);
   return solveTrain({ optics: scope, camera: end, parts, maxSolutions, maxParts: LINK_MAX_PARTS });
 }
+
+/**
+ * The plan's front link, with a separate corrector only: telescope → corrector from the plan's
+ * own parts, and — when those do not join them — whether the catalog would (said in the
+ * reason). The ends come back named, for joinPlan.
+ */
+export function planTelescopeLink({ telescopeRow, correctorRow, parts, catalogConnectors }: {
+  telescopeRow: PartRowLike | null; correctorRow: PartRowLike | null; parts: Part[]; catalogConnectors: Part[];
+}): { link: SolveResult | null; catalogLink: SolveResult | null; telescope: (Part & { name: string }) | null; corrector: (Part & { name: string }) | null } {
+  if (!telescopeRow || !correctorRow) return { link: null, catalogLink: null, telescope: null, corrector: null };
+  const { scope, end } = linkEnds(telescopeRow, correctorRow);
+  const solve = (from: Part[]) => solveLink(telescopeRow, correctorRow, from, 3);
+  const link = solve(parts);
+  const catalogLink = link.status === "ok" ? null : parts === catalogConnectors ? link : solve(catalogConnectors);
+  return {
+    link, catalogLink,
+    telescope: { ...scope, name: `${telescopeRow.maker} ${telescopeRow.model}` },
+    corrector: { ...end, name: `${correctorRow.maker} ${correctorRow.model}` },
+  };
+}

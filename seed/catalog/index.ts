@@ -36,6 +36,9 @@ export type DemoCase = {
   story: string;
 };
 
+/** The demo cases' filters are N-BK7, the usual substrate. */
+export const DEMO_FILTER_INDEX = 1.5168;
+
 export const DEMO_CASES = {
   flagship: {
     title: "55 mm flattener, 2-inch filter wheel, 17.5 mm camera",

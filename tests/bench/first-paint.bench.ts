@@ -9,12 +9,10 @@
 import { gzipSync } from "node:zlib";
 import { chromium } from "playwright-core";
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../../lib/dev/chromium";
-import { DEMO_CASES } from "../../seed/catalog";
+import { EXAMPLE_PLAN_HREF as FLAGSHIP } from "../../seed/example-plan";
 
 const BASE = process.argv[2] ?? process.env.TRAINYARD_BASE_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`;
 const RUNS = Number(process.env.RUNS ?? 15);
-const f = DEMO_CASES.flagship;
-const FLAGSHIP = `/plan?optics=${f.telescope}&corrector=${f.optics}&camera=${f.camera}&stations=${f.stations.join(",")}&filter=${f.filterThicknessMm}&n=1.5168`;
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);

@@ -1,31 +1,20 @@
 // The catalog in Chromium: a member submits a part through the form with a spec sheet, a
 // moderator approves it from the review queue, and it appears in the searchable table.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, signInThroughForm, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import { fillSpacerSubmission, sharedBrowser, signInThroughForm, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 const PDF = Buffer.from("%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n");
 
 describe("catalog in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("a member submits a spacer, the moderator approves it, the table finds it", async () => {
     const model = `Spacer 13.75 e2e ${Date.now()}`;
     const member = await (await browser.newContext()).newPage();
     const errors = watchErrors(member);
     await signInThroughForm(member, "member@trainyard.test");
-    await member.goto(`${BASE_URL}/parts/submit`);
-    await member.getByLabel("Kind").selectOption("spacer");
-    await member.getByLabel("Maker").fill("Bench Test Works");
-    await member.getByLabel("Model").fill(model);
-    await member.getByLabel("Sky side (front) interface").selectOption("M48x0.75");
-    await member.getByLabel("Sky side (front) gender").selectOption("female");
-    await member.getByLabel("Sensor side (rear) interface").selectOption("M48x0.75");
-    await member.getByLabel("Sensor side (rear) gender").selectOption("male");
-    await member.getByLabel("Optical length (mm)").fill("13.75");
+    await fillSpacerSubmission(member, model, "13.75");
 
     // Without a spec sheet the form says what is missing and sends nothing.
     await member.getByRole("button", { name: "Send for review" }).click();

@@ -1,16 +1,13 @@
 // The answer in the first paint: a plan link's answer is in the server's HTML, and the page
 // shows it without asking the solve API; edits still go to the API.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser } from "../support/browser";
 import { BASE_URL } from "../support/http";
 import { FLAGSHIP_PLAN as FLAGSHIP } from "../support/plans";
 
 
 describe("the planner's first paint", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("carries the solved plan in the HTML, readable without JavaScript", async () => {
     const context = await browser.newContext({ javaScriptEnabled: false });
@@ -23,8 +20,7 @@ describe("the planner's first paint", () => {
   });
 
   it("hydrates without a solve request or part look-ups, then solves edits through the API", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
-    const errors = watchErrors(page);
+    const { page, errors } = await browser.page();
     const hydration: string[] = [];
     page.on("console", (m) => { if (m.type() === "error" && /hydrat/i.test(m.text())) hydration.push(m.text()); });
     const asked: string[] = [];

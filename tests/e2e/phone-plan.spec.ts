@@ -1,16 +1,13 @@
 // On a phone the planner's answer reads as a list, sky at the top, with no sideways scrolling;
 // desktops keep the to-scale flow diagram.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import { DESKTOP, sharedBrowser, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
 import { FLAGSHIP_PLAN as FLAGSHIP } from "../support/plans";
 
 
 describe("the planner's train on a phone", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("lists the train at 390 px and draws it at 1440 px", async () => {
     const phone = await (await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true })).newPage();
@@ -25,7 +22,7 @@ describe("the planner's train on a phone", () => {
     expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     expect(errors).toEqual([]);
 
-    const desk = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const desk = await browser.newPage({ viewport: DESKTOP });
     await desk.goto(`${BASE_URL}${FLAGSHIP}`);
     await desk.waitForSelector('#plan-answer[aria-busy="false"] [data-testid="plan-verdict"][data-status="ok"]');
     expect(await desk.getByTestId("train-diagram").isVisible()).toBe(true);

@@ -1,22 +1,19 @@
 // What an experienced imager sees: a missing joint is never "Reaches focus", correctors that
 // join the telescope come first, a wheel's filters are offered to count, and "what to change"
 // applies the change that works in one click.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launch, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { DESKTOP, PHONE, sharedBrowser } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 const settled = (page: Page, status: string) =>
   page.waitForSelector(`#plan-answer[aria-busy="false"] [data-testid="plan-verdict"][data-status="${status}"]`, { timeout: 30_000 });
 
 describe("the planner, read by an expert", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("says a telescope that cannot take its corrector does not connect, and offers nothing to save", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
-    const errors = watchErrors(page);
+    const { page, errors } = await browser.page();
     const q = new URLSearchParams({ optics: "corvane-optical-meridian-102-ed", corrector: "corvane-optical-plano-0-75-m63-reducer", camera: "quillfield-imaging-cinder-26m-cooled" });
     await page.goto(`${BASE_URL}/plan?${q}`);
     await settled(page, "no-connection");
@@ -35,7 +32,7 @@ describe("the planner, read by an expert", () => {
   });
 
   it("marks the correctors that join the chosen telescope and lists them first", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const page = await browser.newPage({ viewport: DESKTOP });
     await page.goto(`${BASE_URL}/plan?optics=corvane-optical-meridian-115-triplet`);
     const box = page.getByRole("combobox", { name: "Corrector" });
     await box.click();
@@ -52,7 +49,7 @@ describe("the planner, read by an expert", () => {
   });
 
   it("asks to count the glass a wheel holds, in one click", async () => {
-    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    const page = await browser.newPage({ viewport: PHONE });
     const q = new URLSearchParams({ optics: "corvane-optical-meridian-80-ed", corrector: "corvane-optical-plano-1-0-flattener", stations: "nettlebeck-instruments-carousel-7-2in", camera: "quillfield-imaging-cinder-26m-cooled" });
     await page.goto(`${BASE_URL}/plan?${q}`);
     await settled(page, "ok");
@@ -65,7 +62,7 @@ describe("the planner, read by an expert", () => {
   });
 
   it("finds the two removals that make a DSLR body reach focus, and applies them", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const page = await browser.newPage({ viewport: DESKTOP });
     const q = new URLSearchParams({ optics: "ashdown-glassworks-pennant-61", stations: "nettlebeck-instruments-sidelook-10-5-oag,nettlebeck-instruments-carousel-7-2in", camera: "sorrel-camera-co-larch-24-f-bayonet" });
     await page.goto(`${BASE_URL}/plan?${q}`);
     await settled(page, "too-long");

@@ -1,8 +1,8 @@
 // The planner in real Chromium: from the home page to a solved, reloadable plan.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { DEMO_CASES, demoCatalog } from "@/seed/catalog";
-import { launch, watchErrors } from "../support/browser";
+import { PHONE, sharedBrowser } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 const flagship = DEMO_CASES.flagship;
@@ -41,13 +41,10 @@ async function snapshot(page: Page) {
 }
 
 describe("the planner in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("solves the flagship train from the home page, and the link reproduces it", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
-    const errors = watchErrors(page);
+    const { page, errors } = await browser.page();
     await page.goto(BASE_URL);
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Planner" }).click();
     await page.waitForURL(/\/plan/);
@@ -90,8 +87,7 @@ describe("the planner in Chromium", () => {
   });
 
   it("keeps the chosen alternative and the unit in the link", async () => {
-    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
-    const errors = watchErrors(page);
+    const { page, errors } = await browser.page(PHONE);
     const q = new URLSearchParams({ optics: corrector.slug, camera: camera.slug, stations: wheel.slug, filter: "2", n: "1.5168" });
     await page.goto(`${BASE_URL}/plan?${q}`);
     await settledInside(page);

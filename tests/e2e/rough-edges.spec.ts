@@ -2,7 +2,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { flagshipRequest, saveBuild } from "../integration/builds-support";
-import { launch, signInThroughForm } from "../support/browser";
+import { fillSpacerSubmission, launch, signInThroughForm } from "../support/browser";
 import { BASE_URL, Client } from "../support/http";
 
 const PDF = Buffer.from("%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n");
@@ -68,12 +68,7 @@ describe("rough edges in Chromium", () => {
 
   it("speaks plainly on the submit form, says a wrong file type once, and lists the submission's status", async () => {
     const model = `Spacer 4.2 edge ${Date.now()}`;
-    await member.goto(`${BASE_URL}/parts/submit`);
-    await member.getByLabel("Kind").selectOption("spacer");
-    await member.getByLabel("Maker").fill("Bench Test Works");
-    await member.getByLabel("Model").fill(model);
-    await member.getByLabel("Sky side (front) interface").selectOption("M48x0.75");
-    await member.getByLabel("Sensor side (rear) interface").selectOption("M48x0.75");
+    await fillSpacerSubmission(member, model);
     await member.getByRole("button", { name: "Send for review" }).click();
     await member.getByText("Enter a number").first().waitFor();
     expect(await bodyText(member)).not.toMatch(/Invalid input|expected number/);

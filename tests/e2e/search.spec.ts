@@ -1,17 +1,13 @@
 // Finding parts the way imagers type them, in the planner's pickers and on /parts.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import { DESKTOP, sharedBrowser } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 describe("part search in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("Enter right after typing picks the best match, and focus moves on to the next field", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
-    const errors = watchErrors(page);
+    const { page, errors } = await browser.page();
     await page.goto(`${BASE_URL}/plan`);
     const optics = page.getByRole("combobox", { name: "Optics" });
     await optics.click();
@@ -33,7 +29,7 @@ describe("part search in Chromium", () => {
   });
 
   it("/parts finds off-axis guiders for “guider” and T-thread parts for “T-thread”", async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const page = await browser.newPage({ viewport: DESKTOP });
     await page.goto(`${BASE_URL}/parts?q=guider`);
     await page.getByRole("link", { name: /Sidelook 10\.5 OAG/ }).first().waitFor({ timeout: 15_000 });
     await page.goto(`${BASE_URL}/parts?q=${encodeURIComponent("T-thread")}`);

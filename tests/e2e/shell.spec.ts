@@ -1,12 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launch, signInThroughForm, watchErrors } from "../support/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser, signInThroughForm, watchErrors } from "../support/browser";
 import { BASE_URL } from "../support/http";
 
 describe("the app shell in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("loads the home page and signs in as the demo member", async () => {
     const page = await browser.newPage();

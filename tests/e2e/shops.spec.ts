@@ -3,10 +3,9 @@
 import { writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
+import { describe, expect, it } from "vitest";
 import { DEMO_CASES } from "@/seed/catalog";
-import { launch, signInThroughForm, watchErrors } from "../support/browser";
+import { DESKTOP, sharedBrowser, signInThroughForm, watchErrors } from "../support/browser";
 import { BASE_URL, signedIn } from "../support/http";
 
 const SHOP = "kilnworth-astro-supply";
@@ -15,9 +14,7 @@ const PLAN = `/plan?optics=${f.telescope}&corrector=${f.optics}&camera=${f.camer
 const CONNECTOR = /spacer|adapter|extension|coupler/;
 
 describe("a shop in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => { browser = await launch(); });
-  afterAll(async () => { await browser?.close(); });
+  const browser = sharedBrowser();
 
   it("imports a CSV after a preview, and a member's plan with that shop's stock uses only stocked parts", async () => {
     const csv = path.join(tmpdir(), `kiln-${Date.now()}.csv`);
@@ -27,7 +24,7 @@ describe("a shop in Chromium", () => {
       ",Tarrant Machining,M48 Spacer 2 mm,KIL-E2E-2,1900,GBP,4",
     ].join("\n"));
 
-    const owner = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const owner = await browser.newPage({ viewport: DESKTOP });
     const ownerErrors = watchErrors(owner);
     await signInThroughForm(owner, "kilnworth@trainyard.test");
     await owner.goto(`${BASE_URL}/shop`);
@@ -52,7 +49,7 @@ describe("a shop in Chromium", () => {
     expect(available.has("tarrant-machining-m48-spacer-16-5-mm")).toBe(true);
 
     // A member picks the shop under "Draw the parts from".
-    const member = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const member = await browser.newPage({ viewport: DESKTOP });
     const memberErrors = watchErrors(member);
     await signInThroughForm(member, "member@trainyard.test");
     await member.goto(`${BASE_URL}${PLAN}`);

@@ -39,3 +39,38 @@ export function browserContexts(viewport = { width: 1440, height: 1000 }) {
     return c;
   };
 }
+
+export const DESKTOP = { width: 1440, height: 1000 };
+export const PHONE = { width: 390, height: 844 };
+
+/**
+ * One Chromium for the describe block (or file) that calls it: launched before its tests,
+ * closed after. `page()` opens a page (desktop size unless told) with its uncaught errors.
+ */
+export function sharedBrowser() {
+  let browser: Browser | undefined;
+  beforeAll(async () => { browser = await launch(); });
+  afterAll(async () => { await browser?.close(); });
+  const open = () => browser ?? Promise.reject(new Error("sharedBrowser() is used outside its describe block"));
+  return {
+    async page(viewport: { width: number; height: number } = DESKTOP) {
+      const page = await (await open()).newPage({ viewport });
+      return { page, errors: watchErrors(page) };
+    },
+    newPage: async (...args: Parameters<Browser["newPage"]>) => (await open()).newPage(...args),
+    newContext: async (...args: Parameters<Browser["newContext"]>) => (await open()).newContext(...args),
+  };
+}
+
+/** The submit form filled for an M48 spacer (female front, male rear) by "Bench Test Works"; the length only when given. */
+export async function fillSpacerSubmission(page: Page, model: string, lengthMm?: string) {
+  await page.goto(`${BASE_URL}/parts/submit`);
+  await page.getByLabel("Kind").selectOption("spacer");
+  await page.getByLabel("Maker").fill("Bench Test Works");
+  await page.getByLabel("Model").fill(model);
+  await page.getByLabel("Sky side (front) interface").selectOption("M48x0.75");
+  await page.getByLabel("Sky side (front) gender").selectOption("female");
+  await page.getByLabel("Sensor side (rear) interface").selectOption("M48x0.75");
+  await page.getByLabel("Sensor side (rear) gender").selectOption("male");
+  if (lengthMm !== undefined) await page.getByLabel("Optical length (mm)").fill(lengthMm);
+}

@@ -5,6 +5,8 @@ import { describe, expect, it } from "vitest";
 import { getInterface, INTERFACE_CODES, INTERFACES } from "@/lib/interfaces";
 import { partInputSchema, type PartInput } from "@/lib/validation/parts";
 import { DEMO_CASES, DEMO_MAKERS, demoCatalog, type DemoCase } from "@/seed/catalog";
+import { EXAMPLE_PLAN, EXAMPLE_PLAN_HREF } from "@/seed/example-plan";
+import { parsePlanParams } from "@/lib/planner/url-state";
 
 const bySlug = new Map(demoCatalog.map((p) => [p.slug!, p]));
 const get = (slug: string): PartInput => bySlug.get(slug) ?? expect.unreachable(`No demo part ${slug}`);
@@ -330,5 +332,13 @@ describe("demo cases", () => {
     const wheelPlusCamera = get(DEMO_CASES.tooLong.stations[0]).lengthMm + get(DEMO_CASES.tooLong.camera).lengthMm;
     expect(wheelPlusCamera).toBeGreaterThan(r.target + 0.3);
     expect(r.shortest).toBeCloseTo(44, 6);
+  });
+});
+
+describe("the planner's example plan", () => {
+  it("opens the flagship case with parts of the demo catalog, and its link parses back to it", () => {
+    const kinds = [EXAMPLE_PLAN.optics, EXAMPLE_PLAN.corrector, EXAMPLE_PLAN.camera, ...EXAMPLE_PLAN.stations].map((slug) => get(slug!).kind);
+    expect(kinds).toEqual(["optics", "optics", "camera", "filter-wheel"]);
+    expect(parsePlanParams(new URL(EXAMPLE_PLAN_HREF, "http://x").searchParams)).toEqual(EXAMPLE_PLAN);
   });
 });

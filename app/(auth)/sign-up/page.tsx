@@ -4,6 +4,7 @@ import { SignUpForm } from "@/components/auth/sign-up-form";
 import { isMailFake } from "@/lib/mail";
 
 export const metadata = { title: "Create an account" };
+// isMailFake() reads SMTP_URL when the server runs, not when it was built.
 export const dynamic = "force-dynamic";
 
 export default function SignUpPage() {

@@ -7,7 +7,7 @@ import { getApprovedPartsByRefs } from "@/db/queries/parts";
 import { listPublicShops } from "@/db/queries/shops";
 import { correctorJoins } from "@/lib/planner/corrector-joins";
 import type { SessionUser } from "@/lib/auth/session";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 import { runPlan, type PlanInput } from "@/lib/planner/run-plan";
 import { planStateToSolveRequest, type PlanState } from "@/lib/planner/url-state";
 import { parsePlanRequest } from "@/lib/validation/plan";

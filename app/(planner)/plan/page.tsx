@@ -6,8 +6,8 @@ import { parsePlanParams, planStateToParams } from "@/lib/planner/url-state";
 import { firstAnswer } from "./first-answer";
 import { PlanWorkbench } from "./plan-workbench";
 import { defaultShopSource } from "@/lib/shops/default-source";
+import { EXAMPLE_PLAN_HREF } from "@/seed/example-plan";
 
-export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Planner" };
 
 type Search = Record<string, string | string[] | undefined>;
@@ -35,7 +35,7 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
       {/* The left column's stops are h3s: this keeps the outline h1 → h2 → h3. */}
       <h2 className="sr-only">Your train and its answer</h2>
       <HydrationBoundary state={answer ?? undefined}>
-        <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} />
+        <PlanWorkbench key={planStateToParams(initial).toString()} initial={initial} signedIn={!!user} exampleHref={EXAMPLE_PLAN_HREF} />
       </HydrationBoundary>
     </>
   );

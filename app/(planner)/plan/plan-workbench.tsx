@@ -4,9 +4,9 @@ import { Planner } from "@/components/planner/planner";
 import type { PlanState } from "@/lib/planner/url-state";
 
 /** The planner with "Save as link" plugged into its action slot. */
-export function PlanWorkbench({ initial, signedIn }: { initial: PlanState; signedIn: boolean }) {
+export function PlanWorkbench({ initial, signedIn, exampleHref }: { initial: PlanState; signedIn: boolean; exampleHref: string }) {
   return (
-    <Planner initial={initial} signedIn={signedIn}
+    <Planner initial={initial} signedIn={signedIn} exampleHref={exampleHref}
       renderActions={({ request, solutionIndex, result }) => {
         const items = result.context?.items ?? {};
         const optics = items[result.context?.opticsId ?? ""]?.name;

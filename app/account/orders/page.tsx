@@ -1,16 +1,13 @@
 import Link from "next/link";
-import { redirect } from "next/navigation";
 import { OrdersTable } from "@/components/orders/orders-table";
 import { PageTitle } from "@/components/ui/card";
 import { listBuyerQuotes } from "@/db/queries/orders";
-import { getSessionUser } from "@/lib/auth/session";
+import { requireUser } from "@/lib/signed-in";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Your orders" };
 
 export default async function AccountOrdersPage() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?next=/account/orders");
+  const user = await requireUser("/account/orders");
   const rows = await listBuyerQuotes({ buyerId: user.id });
   return (
     <div>

@@ -1,13 +1,11 @@
 import Link from "next/link";
-import { redirect } from "next/navigation";
 import { listSubmissionsBy } from "@/db/queries/submissions";
 import { ButtonLink } from "@/components/ui/button";
 import { PageTitle } from "@/components/ui/card";
-import { getSessionUser } from "@/lib/auth/session";
+import { requireUser } from "@/lib/signed-in";
 import { KIND_LABELS } from "@/lib/format";
 
 export const metadata = { title: "My submissions" };
-export const dynamic = "force-dynamic";
 
 const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
@@ -20,8 +18,7 @@ const STATUS = {
 
 /** The parts a member submitted and what became of each. */
 export default async function SubmissionsPage() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?next=/account/submissions");
+  const user = await requireUser("/account/submissions");
   // A member's own list: the newest 200 (paging is for the API; nobody submits more here).
   const { items: rows } = await listSubmissionsBy({ userId: user.id, limit: 200 });
   return (

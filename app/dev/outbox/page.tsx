@@ -7,7 +7,6 @@ import { getSessionUser } from "@/lib/auth/session";
 import { mayReadOutbox } from "@/lib/dev/outbox-access";
 
 export const metadata = { title: "Local outbox" };
-export const dynamic = "force-dynamic";
 
 function linkify(text: string) {
   return text.split(/(https?:\/\/\S+)/g).map((part, i) =>

@@ -10,13 +10,12 @@ import { SafetyNote } from "@/components/safety-note";
 import { PartStockists } from "@/components/shops/part-stockists";
 import { ButtonLink } from "@/components/ui/button";
 import { allowed, getSessionUser } from "@/lib/auth/session";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 import { AppError } from "@/lib/errors";
 import { KIND_LABELS, formatGrams, formatPrice } from "@/lib/format";
 import { formatMm } from "@/lib/units";
 import { getInterface } from "@/lib/interfaces";
 
-export const dynamic = "force-dynamic";
 
 function planHref(kind: string, slug: string) {
   if (kind === "optics") return `/plan?optics=${slug}`;

@@ -4,7 +4,6 @@ import { PageTitle } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 
 export const metadata = { title: "Submit a part" };
-export const dynamic = "force-dynamic";
 
 export default async function SubmitPartPage() {
   if (!(await getSessionUser())) redirect("/sign-in?next=/parts/submit");

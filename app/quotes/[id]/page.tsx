@@ -12,7 +12,6 @@ import { formatMoney } from "@/lib/payments/money";
 import { canCancel, canPay, isExpired } from "@/lib/payments/status";
 import { quoteToJson } from "@/lib/payments/to-json";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Quote", robots: { index: false } };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };

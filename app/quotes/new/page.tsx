@@ -6,7 +6,6 @@ import { getSessionUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
 import { loadBuildNeeds, offersFor } from "@/lib/payments/quote-request";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Ask a shop for a quote" };
 
 type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };

@@ -1,16 +1,15 @@
 import { headers } from "next/headers";
 import Link from "next/link";
-import { redirect } from "next/navigation";
 import { listReviewQueue } from "@/db/queries/builds";
 import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "@/components/builds/badges";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { PageTitle } from "@/components/ui/card";
-import { allowed, getSessionUser } from "@/lib/auth/session";
+import { allowed } from "@/lib/auth/session";
+import { requireUser } from "@/lib/signed-in";
 import { siteOrigin } from "@/lib/builds/site-url";
 import { buildSummary, type BuildListRow } from "@/lib/builds/to-json";
 
 export const metadata = { title: "Builds to look at" };
-export const dynamic = "force-dynamic";
 
 const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
@@ -36,8 +35,7 @@ function Row({ row, origin }: { row: BuildListRow; origin: string }) {
 }
 
 export default async function ReviewBuildsPage() {
-  const user = await getSessionUser();
-  if (!user) redirect("/sign-in?next=/review/builds");
+  const user = await requireUser("/review/builds");
   if (!allowed(user, { build: "moderate" })) return <p className="text-muted">Only moderators look after builds.</p>;
   const { flagged, recent } = await listReviewQueue({ limit: 50 });
   const origin = siteOrigin(await headers());

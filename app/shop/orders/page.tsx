@@ -5,7 +5,6 @@ import { PageTitle } from "@/components/ui/card";
 import { listMemberShops, listShopQuotes } from "@/db/queries/orders";
 import { getSessionUser } from "@/lib/auth/session";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Shop orders" };
 
 type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };

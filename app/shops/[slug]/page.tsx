@@ -6,7 +6,6 @@ import { listPublicStock, listShopReferenceBuilds } from "@/db/queries/shops-pub
 import { KIND_LABELS } from "@/lib/format";
 import { formatMoney } from "@/lib/shops/money";
 
-export const dynamic = "force-dynamic";
 
 export async function generateMetadata({ params }: { params: Promise<{ slug: string }> }) {
   const shop = await getShopBySlug({ slug: (await params).slug });

@@ -5,7 +5,7 @@ import { getPartOrThrow } from "@/db/queries/parts";
 import { withSession } from "@/lib/auth/session";
 import { parseJsonBody } from "@/lib/http/body";
 import { setGearSchema } from "@/lib/validation/gear";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 
 export const dynamic = "force-dynamic";
 

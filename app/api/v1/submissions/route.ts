@@ -3,7 +3,7 @@
 import { countSubmissionsSince, createSubmission, listPendingSubmissions, listSubmissionsBy } from "@/db/queries/submissions";
 import { allowed, withSession } from "@/lib/auth/session";
 import { parseWith } from "@/lib/http/body";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 import { AppError } from "@/lib/errors";
 import { readBodyBytes } from "@/lib/http/body";
 import { checkSpecSheet, SPEC_SHEET_MAX_BYTES } from "@/lib/spec-sheet";

@@ -13,7 +13,6 @@ import { formatMoney } from "@/lib/payments/money";
 import { canAnswer, canCancel, canRefund, canShip } from "@/lib/payments/status";
 import { quoteToJson } from "@/lib/payments/to-json";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Shop order", robots: { index: false } };
 
 type Props = { params: Promise<{ id: string }> };

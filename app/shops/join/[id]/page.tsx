@@ -4,7 +4,6 @@ import { AcceptInvitation } from "@/components/shops/accept-invitation";
 import { getInvitation } from "@/db/queries/shops";
 import { getSessionUser } from "@/lib/auth/session";
 
-export const dynamic = "force-dynamic";
 export const metadata = { title: "Shop invitation" };
 
 export default async function JoinPage({ params }: { params: Promise<{ id: string }> }) {

@@ -4,7 +4,7 @@ import { getPartOrThrow, updatePart } from "@/db/queries/parts";
 import { allowed, withSession } from "@/lib/auth/session";
 import { parseJsonBody } from "@/lib/http/body";
 import { recheckBuildsForParts } from "@/lib/builds/recheck";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 import { partPatchSchema } from "@/lib/validation/submissions";
 
 export const dynamic = "force-dynamic";

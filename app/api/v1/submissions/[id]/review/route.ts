@@ -2,7 +2,7 @@
 import { getSubmissionOrThrow, reviewSubmission } from "@/db/queries/submissions";
 import { withSession } from "@/lib/auth/session";
 import { parseJsonBody } from "@/lib/http/body";
-import { rowToApiPart } from "@/lib/catalog/rows";
+import { rowToApiPart } from "@/lib/catalog/part-json";
 import { AppError } from "@/lib/errors";
 import { sendMail } from "@/lib/mail";
 import { reviewDecisionSchema } from "@/lib/validation/submissions";
