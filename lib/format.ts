@@ -23,3 +23,10 @@ const andList = new Intl.ListFormat("en-GB", { style: "long", type: "conjunction
 export function listAnd(items: readonly string[]): string {
   return andList.format(items);
 }
+
+const dayFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+
+/** "5 Dec 2026" (UTC, so the server's and the browser's pages agree); "—" for no date. */
+export function formatDay(d: Date | string | null | undefined): string {
+  return d ? dayFormat.format(new Date(d)) : "—";
+}

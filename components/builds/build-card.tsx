@@ -1,10 +1,9 @@
 import Link from "next/link";
 import type { BuildSummary } from "@/lib/builds/to-json";
 import { signedMm } from "@/lib/builds/train";
-import { formatPrice } from "@/lib/format";
+import { formatPrice, formatDay } from "@/lib/format";
 import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "./badges";
 
-const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 /** The error in words: a signed zero read like a zero tolerance ("±0.00"). */
 export function offTarget(errorMm: number): string {
@@ -49,7 +48,7 @@ export function BuildCard({ build, showVisibility = false }: { build: BuildSumma
           <dd className="num">{build.partCount ?? "—"} · {build.priceCents === null ? "—" : formatPrice(build.priceCents)}</dd>
         </div>
       </dl>
-      <p className="text-xs text-muted">{build.owner.name} · {day(build.createdAt)}</p>
+      <p className="text-xs text-muted">{build.owner.name} · {formatDay(build.createdAt)}</p>
     </li>
   );
 }

@@ -70,6 +70,11 @@ export function SubmitPartForm() {
       {errorAt(errors, side) ? <p className="text-sm text-bad">{errorAt(errors, side)}</p> : null}
     </fieldset>
   );
+  const choiceField = (path: string, label: string, choices: readonly string[]) => (
+    <Field label={label} htmlFor={path} error={errorAt(errors, path)}>
+      <select id={path} className={inputClass} {...register(path as never)}><option value="">Choose…</option>{choices.map((c) => <option key={c} value={c}>{c}</option>)}</select>
+    </Field>
+  );
   const numberField = (path: string, label: string, hint?: string) => (
     <Field label={label} htmlFor={path} error={errorAt(errors, path)} hint={hint}>
       <Input id={path} inputMode="decimal" type="number" step="any" invalid={!!errorAt(errors, path)} {...register(path as never, num)} />
@@ -96,9 +101,7 @@ export function SubmitPartForm() {
       <label className="flex items-center gap-2 text-sm"><input type="checkbox" {...register("reversible")} /> Can be mounted either way round</label>
       {kind === "optics" ? (
         <div className="grid gap-4 sm:grid-cols-4">
-          <Field label="Role" htmlFor="specs.opticsRole" error={errorAt(errors, "specs.opticsRole")}>
-            <select id="specs.opticsRole" className={inputClass} {...register("specs.opticsRole")}><option value="">Choose…</option>{OPTICS_ROLES.map((r) => <option key={r} value={r}>{r}</option>)}</select>
-          </Field>
+          {choiceField("specs.opticsRole", "Role", OPTICS_ROLES)}
           {numberField("specs.focalLengthMm", "Focal length (mm)")}
           {numberField("specs.apertureMm", "Aperture (mm)")}
           {numberField("specs.backFocusMm", "Back focus (mm)")}
@@ -116,9 +119,7 @@ export function SubmitPartForm() {
         </div>) : null}
       {kind === "filter-wheel" || kind === "filter-drawer" ? (
         <div className="grid gap-4 sm:grid-cols-3">
-          <Field label="Filter size" htmlFor="specs.filterSize" error={errorAt(errors, "specs.filterSize")}>
-            <select id="specs.filterSize" className={inputClass} {...register("specs.filterSize")}><option value="">Choose…</option>{FILTER_SIZES.map((s) => <option key={s} value={s}>{s}</option>)}</select>
-          </Field>
+          {choiceField("specs.filterSize", "Filter size", FILTER_SIZES)}
           {numberField("specs.slots", "Slots")}
           {numberField("specs.filterThicknessMm", "Filter thickness (mm)")}
         </div>) : null}

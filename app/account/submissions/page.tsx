@@ -3,11 +3,10 @@ import { listSubmissionsBy } from "@/db/queries/submissions";
 import { ButtonLink } from "@/components/ui/button";
 import { PageTitle } from "@/components/ui/card";
 import { requireUser } from "@/lib/signed-in";
-import { KIND_LABELS } from "@/lib/format";
+import { KIND_LABELS, formatDay } from "@/lib/format";
 
 export const metadata = { title: "My submissions" };
 
-const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 // Each state has its own glyph and words as well as colour (night mode shows them all in red).
 const STATUS = {
@@ -38,7 +37,7 @@ export default async function SubmissionsPage() {
                   <h2 className="font-semibold text-ink">
                     {p.status === "approved" ? <Link href={`/parts/${p.slug}`} className="underline-offset-4 hover:underline">{p.maker} {p.model}</Link> : <>{p.maker} {p.model}</>}
                   </h2>
-                  <p className="text-sm text-muted">{KIND_LABELS[p.kind] ?? p.kind} · sent {day(p.createdAt)}{p.reviewedAt ? ` · reviewed ${day(p.reviewedAt)}` : ""}</p>
+                  <p className="text-sm text-muted">{KIND_LABELS[p.kind] ?? p.kind} · sent {formatDay(p.createdAt)}{p.reviewedAt ? ` · reviewed ${formatDay(p.reviewedAt)}` : ""}</p>
                   {p.reviewReason ? <p className="text-sm text-text">Moderator&apos;s note: <q>{p.reviewReason}</q></p> : null}
                   {p.probableDuplicateOf && p.status === "pending" ? <p className="text-sm text-muted">Looks like <Link className="underline" href={`/parts/${p.probableDuplicateOf}`}>a part already in the catalog</Link>; a moderator will decide.</p> : null}
                 </div>

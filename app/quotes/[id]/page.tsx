@@ -11,11 +11,11 @@ import { reconcileCheckout } from "@/lib/payments/checkout";
 import { formatMoney } from "@/lib/payments/money";
 import { canCancel, canPay, isExpired } from "@/lib/payments/status";
 import { quoteToJson } from "@/lib/payments/to-json";
+import { formatDay } from "@/lib/format";
 
 export const metadata = { title: "Quote", robots: { index: false } };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
-const day = (d: Date | string | null) => (d ? new Date(d).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" }) : "—");
 
 async function load(id: string, userId: string) {
   try {
@@ -51,12 +51,12 @@ export default async function QuotePage({ params, searchParams }: Props) {
         <div className="space-y-2">
           <div className="flex flex-wrap items-center gap-2"><StatusBadge status={q.status} expiresAt={q.expiresAt} /><span className="code text-sm text-muted">{q.ref}</span></div>
           <h1 className="text-2xl font-semibold tracking-tight text-ink sm:text-3xl">Parts for “{q.build.title}”</h1>
-          <p className="text-sm text-muted">From <strong className="font-semibold text-text">{q.shop.name}</strong> · asked {day(q.createdAt)}{q.quotedAt ? <> · quoted {day(q.quotedAt)}</> : null}{q.paidAt ? <> · paid {day(q.paidAt)}</> : null}</p>
+          <p className="text-sm text-muted">From <strong className="font-semibold text-text">{q.shop.name}</strong> · asked {formatDay(q.createdAt)}{q.quotedAt ? <> · quoted {formatDay(q.quotedAt)}</> : null}{q.paidAt ? <> · paid {formatDay(q.paidAt)}</> : null}</p>
         </div>
         <div className="text-right">
           <div className="text-xs uppercase tracking-wide text-muted">{q.status === "requested" ? "Listed prices" : "Total"}</div>
           <div className="num text-3xl font-semibold text-ink">{money(q.totalCents)}</div>
-          {q.expiresAt && (q.status === "quoted" || q.status === "awaiting_payment") ? <div className={`text-xs ${q.expired ? "text-bad" : "text-muted"}`}>{q.expired ? "expired" : "valid until"} {day(q.expiresAt)}</div> : null}
+          {q.expiresAt && (q.status === "quoted" || q.status === "awaiting_payment") ? <div className={`text-xs ${q.expired ? "text-bad" : "text-muted"}`}>{q.expired ? "expired" : "valid until"} {formatDay(q.expiresAt)}</div> : null}
         </div>
       </header>
 
@@ -77,13 +77,13 @@ export default async function QuotePage({ params, searchParams }: Props) {
       <div className="grid gap-4 sm:grid-cols-2">
         {q.buyerNote ? <Note title="Your note" text={q.buyerNote} /> : null}
         {q.shopNote ? <Note title={`${q.shop.name} says`} text={q.shopNote} /> : null}
-        {q.tracking ? <Note title={`Shipped ${day(q.shippedAt)}`} text={q.tracking} /> : null}
-        {q.status === "refunded" ? <Note title={`Refunded ${day(q.refundedAt)}`} text={`${money(q.totalCents)} goes back to the card you paid with.`} /> : null}
-        {q.status === "cancelled" ? <Note title={`Cancelled ${day(q.cancelledAt)}`} text={q.cancelReason ?? "No reason given."} /> : null}
+        {q.tracking ? <Note title={`Shipped ${formatDay(q.shippedAt)}`} text={q.tracking} /> : null}
+        {q.status === "refunded" ? <Note title={`Refunded ${formatDay(q.refundedAt)}`} text={`${money(q.totalCents)} goes back to the card you paid with.`} /> : null}
+        {q.status === "cancelled" ? <Note title={`Cancelled ${formatDay(q.cancelledAt)}`} text={q.cancelReason ?? "No reason given."} /> : null}
       </div>
 
       {q.status === "requested" ? <p className="text-sm text-muted">Waiting for {q.shop.name} to answer with its prices and shipping.</p> : null}
-      {q.expired ? <FormMessage>This quote expired on {day(q.expiresAt)}. Ask {q.shop.name} for a fresh one.</FormMessage> : null}
+      {q.expired ? <FormMessage>This quote expired on {formatDay(q.expiresAt)}. Ask {q.shop.name} for a fresh one.</FormMessage> : null}
       <BuyerActions id={q.id} canPay={canPay(found.quote) && !isExpired(found.quote)} paymentOpen={q.paymentOpen} canCancel={canCancel(q.status)} total={money(q.totalCents)} />
     </article>
   );

@@ -8,10 +8,10 @@ import { allowed } from "@/lib/auth/session";
 import { requireUser } from "@/lib/signed-in";
 import { siteOrigin } from "@/lib/builds/site-url";
 import { buildSummary, type BuildListRow } from "@/lib/builds/to-json";
+import { formatDay } from "@/lib/format";
 
 export const metadata = { title: "Builds to look at" };
 
-const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 function Row({ row, origin }: { row: BuildListRow; origin: string }) {
   const b = buildSummary(row, origin);
@@ -25,7 +25,7 @@ function Row({ row, origin }: { row: BuildListRow; origin: string }) {
           {b.hidden ? <HiddenBadge /> : null}
         </div>
         <h2 className="text-base font-semibold text-ink"><Link href={`/b/${b.slug}`} className="underline-offset-4 hover:underline">{b.title}</Link></h2>
-        <p className="text-muted">{[b.telescope, b.optics].filter(Boolean).join(" + ")}{b.stations.length ? ` → ${b.stations.join(" → ")}` : ""} → {b.camera} · {b.owner.name} · {day(b.createdAt)}</p>
+        <p className="text-muted">{[b.telescope, b.optics].filter(Boolean).join(" + ")}{b.stations.length ? ` → ${b.stations.join(" → ")}` : ""} → {b.camera} · {b.owner.name} · {formatDay(b.createdAt)}</p>
         <p className="num">Sensor at {b.sensorDistanceMm?.toFixed(2) ?? "—"} mm{b.targetMm !== null ? ` for ${b.targetMm.toFixed(2)} ± ${(b.toleranceMm ?? 0).toFixed(2)} mm` : ""} · {b.partCount ?? "—"} connecting parts</p>
         {!b.fits && b.checkReason ? <p className="text-bad">{b.checkReason}</p> : null}
       </div>
