@@ -2,8 +2,9 @@
 // open faces, sorted and grouped by (from, to). Built once per parts array and cached.
 
 import type DirectedGraphType from "graphology";
-import { FaceTable } from "./faces";
+import { FaceTable, turnsAround } from "./faces";
 import { buildFaceGraph } from "./graph";
+import { cmpPrice } from "./topk";
 import type { Part } from "./types";
 
 export type Model = {
@@ -78,8 +79,7 @@ export function buildModel(parts: readonly Part[]): Model {
     const len = p.lengthMm, adj = Math.max(0, p.adjustMm ?? 0), price = p.priceCents ?? Infinity;
     rPart[n] = i; rRev[n] = 0; rFrom[n] = faces.entryOf(front); rTo[n] = faces.exitOf(rear);
     rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
-    const symmetric = front.interface === rear.interface && front.gender === rear.gender;
-    if (p.reversible && !symmetric) {
+    if (turnsAround(p)) {
       rPart[n] = i; rRev[n] = 1; rFrom[n] = faces.entryOf(rear); rTo[n] = faces.exitOf(front);
       rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
     }
@@ -134,10 +134,6 @@ export function buildModel(parts: readonly Part[]): Model {
   };
   const graph = buildFaceGraph(model);
   return { ...model, graph, buildMs: performance.now() - t0 };
-}
-
-export function cmpPrice(a: number, b: number): number {
-  return a === b ? 0 : a < b ? -1 : 1;
 }
 
 const cache = new WeakMap<readonly Part[], Model>();

@@ -9,54 +9,14 @@
 // ordering exactly (orderings.ts) before it is ranked.
 
 import { getClasses } from "./classes";
-import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, type Ordered, spend } from "./orderings";
+import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, spend } from "./orderings";
 import type { Problem } from "./problem";
 import { Reach, requestGrain } from "./reach";
 import type { Tables } from "./tables";
-import { decodeStationMove, RANK_EPS } from "./topk";
+import { decodeStationMove } from "./moves";
+import { cmpBound, cmpEntry, type Entry, GeoTop, RANK_EPS } from "./topk";
 import type { Chain } from "./types";
 import { type Bound, Walker } from "./walker";
-
-export type Entry = {
-  warned: boolean; k: number; detours: number; err: number; price: number; d: number;
-  msKey: string; geoKey: string; counts: Map<number, number>; ord: Ordered;
-};
-
-const cmpLen = (a: number, b: number) => (Math.abs(a - b) <= RANK_EPS ? 0 : a < b ? -1 : 1);
-const cmpPrice = (a: number, b: number) => (a === b ? 0 : a < b ? -1 : 1);
-
-export function cmpEntry(a: Entry, b: Entry): number {
-  return (a.warned === b.warned ? 0 : a.warned ? 1 : -1) || a.k - b.k || a.detours - b.detours ||
-    cmpLen(a.err, b.err) || cmpPrice(a.price, b.price) || cmpLen(a.d, b.d) ||
-    (a.msKey < b.msKey ? -1 : a.msKey > b.msKey ? 1 : 0);
-}
-
-/** A relaxed bound (detours taken as 0) against an entry of the same phase and level. */
-function cmpBound(b: Bound, worst: Entry): number {
-  if (worst.detours > 0) return -1;
-  return cmpLen(b.err, worst.err) || cmpPrice(b.price, worst.price) || cmpLen(b.d, worst.d);
-}
-
-/** The best `capacity` geometries, each held by its best multiset so far. */
-class GeoTop {
-  readonly items: Entry[] = [];
-  private readonly byGeo = new Map<string, Entry>();
-  constructor(readonly capacity: number) {}
-  get full(): boolean { return this.items.length >= this.capacity; }
-  get worst(): Entry | undefined { return this.items[this.items.length - 1]; }
-  offer(e: Entry): void {
-    const prev = this.byGeo.get(e.geoKey);
-    if (prev) {
-      if (cmpEntry(e, prev) >= 0) return;
-      this.items.splice(this.items.indexOf(prev), 1);
-    } else if (this.full && cmpEntry(e, this.worst!) >= 0) return;
-    let i = this.items.length;
-    while (i > 0 && cmpEntry(e, this.items[i - 1]) < 0) i--;
-    this.items.splice(i, 0, e);
-    this.byGeo.set(e.geoKey, e);
-    if (this.items.length > this.capacity) this.byGeo.delete(this.items.pop()!.geoKey);
-  }
-}
 
 function keysOf(p: Problem, counts: ReadonlyMap<number, number>): { msKey: string; geoKey: string } {
   const { classOf } = getClasses(p.model);

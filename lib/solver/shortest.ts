@@ -7,7 +7,7 @@ import { dijkstra } from "graphology-shortest-path";
 import type { Model } from "./model";
 import type { Problem } from "./problem";
 import type { Tables } from "./tables";
-import { stationMove } from "./topk";
+import { stationMove } from "./moves";
 
 type LegPath = { len: number; moves: number[] } | null;
 

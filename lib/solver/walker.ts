@@ -11,7 +11,8 @@
 import type { Problem, StationMount } from "./problem";
 import type { Reach } from "./reach";
 import type { Tables } from "./tables";
-import { stationMove } from "./topk";
+import { stationMove } from "./moves";
+import { cmpPrice } from "./topk";
 
 /** A relaxed lower bound on the ranking key (|error|, price, D) of any chain through a state. */
 export type Bound = { err: number; price: number; d: number };
@@ -225,7 +226,7 @@ export class Walker {
     if (leg < p.S) {
       for (const mt of p.exits[leg]) if (mt.entry === f) consider(stationMove(mt.station, mt.rev), leg + 1, mt.exit, mt.len, mt.adj, 0, u, false);
     }
-    kids.sort((x, y) => x.err - y.err || (x.price === y.price ? 0 : x.price < y.price ? -1 : 1) || x.d - y.d);
+    kids.sort((x, y) => x.err - y.err || cmpPrice(x.price, y.price) || x.d - y.d);
     for (const kid of kids) {
       const verdict = s.order!.verdict(kid);
       if (verdict === "stop") break;
