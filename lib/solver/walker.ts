@@ -231,11 +231,9 @@ export class Walker {
       const verdict = s.order!.verdict(kid);
       if (verdict === "stop") break;
       if (verdict === "skip") continue;
+      // Stock was checked in candidates(): every sibling's walk puts back what it took.
       const part = kid.move >= 0 ? m.oPart[kid.move] : -1;
-      if (part >= 0) {
-        if (this.used[part] >= m.quantity[part]) continue;
-        this.used[part]++;
-      }
+      if (part >= 0) this.used[part]++;
       this.moves.push(kid.move);
       if (s.alive && !s.alive(kid.leg, p.loc[kid.leg][kid.to], this.k - kid.u, this.moves)) {
         this.moves.pop();
