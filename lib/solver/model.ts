@@ -12,6 +12,10 @@ export type Model = {
   faces: FaceTable;
   /** Per part: most uses in one chain (Infinity = unlimited). */
   quantity: Float64Array;
+  /** Per part: clearApertureMm, NaN when it has none (it never vignettes). */
+  aperture: Float64Array;
+  /** Per part: weightG, 0 when unknown (as the load warning counts it). */
+  weight: Float64Array;
   // Orientations, sorted by (from, to, length, price, part).
   oPart: Int32Array;
   oRev: Uint8Array;
@@ -67,6 +71,7 @@ export function buildModel(parts: readonly Part[]): Model {
   const t0 = performance.now();
   const faces = new FaceTable();
   const quantity = new Float64Array(parts.length);
+  const aperture = new Float64Array(parts.length), weight = new Float64Array(parts.length);
   const cap = parts.length * 2;
   const rPart = new Int32Array(cap), rRev = new Uint8Array(cap), rFrom = new Int32Array(cap), rTo = new Int32Array(cap);
   const rLen = new Float64Array(cap), rAdj = new Float64Array(cap), rPrice = new Float64Array(cap);
@@ -74,6 +79,8 @@ export function buildModel(parts: readonly Part[]): Model {
   for (let i = 0; i < parts.length; i++) {
     const p = parts[i];
     quantity[i] = p.quantity === undefined ? Infinity : Math.floor(p.quantity);
+    aperture[i] = typeof p.clearApertureMm === "number" ? p.clearApertureMm : Number.NaN;
+    weight[i] = typeof p.weightG === "number" ? p.weightG : 0;
     if (!usableConnector(p)) continue;
     const front = p.front!, rear = p.rear!;
     const len = p.lengthMm, adj = Math.max(0, p.adjustMm ?? 0), price = p.priceCents ?? Infinity;
@@ -129,7 +136,7 @@ export function buildModel(parts: readonly Part[]): Model {
   const g1 = grainOf(oLen), g2 = grainOf(oAdj);
   const grainMm = g1 === null || g2 === null ? null : grainOf([g1, g2]);
   const model: Omit<Model, "graph" | "buildMs"> = {
-    parts, faces, quantity, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
+    parts, faces, quantity, aperture, weight, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
     gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn, grainMm,
   };
   const graph = buildFaceGraph(model);
