@@ -50,7 +50,7 @@ export function everyChainWarned(p: Problem): boolean {
   }
   const maxLoad = loadLimitG(p);
   const fixed = [...p.stations, camera];
-  if (maxLoad !== null && fixed.every((x) => (x.weightG ?? 0) >= 0) && p.model.parts.every((x) => (x.weightG ?? 0) >= 0)) {
+  if (maxLoad !== null && fixed.every((x) => (x.weightG ?? 0) >= 0) && p.model.weight.every((w) => w >= 0)) {
     if (fixed.reduce((w, x) => w + (x.weightG ?? 0), 0) > maxLoad + 1e-9) return true;
   }
   return false;
