@@ -1,69 +1,12 @@
-// The scalar relaxations behind clean.ts, cheap enough to fill on every level of phase one:
+// The scalar relaxation behind clean.ts, cheap enough to fill on every level of phase one:
 // per leg, relevant face and exact number of connecting parts left (stock ignored), the least
-// weight of a way to finish, and the least and most length a clean way to finish can add.
+// and most length a clean way to finish can add. (The least weight is in tables.ts.)
 
-import type { Model } from "./model";
 import type { Problem } from "./problem";
 import type { Limits } from "./reach";
 
 /** Slack on a limit before it prunes: float noise must never turn a clean chain away. */
 export const LIMIT_SLACK = 1e-7;
-
-export const weightOf = (w: number | undefined): number => (typeof w === "number" ? w : 0);
-
-/** Per group: the least weight of its orientations (an unknown weight counts 0, as the load warning counts it). */
-const groupWeights = new WeakMap<Model, Float64Array>();
-function minGroupWeight(m: Model): Float64Array {
-  let out = groupWeights.get(m);
-  if (out) return out;
-  out = new Float64Array(m.gFrom.length).fill(Infinity);
-  for (let g = 0; g < out.length; g++) {
-    for (let o = m.gStart[g]; o < m.gEnd[g]; o++) out[g] = Math.min(out[g], m.weight[m.oPart[o]]);
-  }
-  groupWeights.set(m, out);
-  return out;
-}
-
-/** Least weight of a way to finish, per leg, relevant face and exact parts left (camera included; stock ignored). */
-export class LeastWeight {
-  private readonly W: number;
-  readonly at: Float64Array[];
-  private built = -1;
-
-  constructor(private readonly p: Problem) {
-    this.W = p.maxParts + 1;
-    this.at = p.rel.map((r) => new Float64Array(r.length * this.W).fill(Infinity));
-  }
-
-  ensure(r: number): void {
-    const { p, W, at } = this;
-    const m = p.model, gw = minGroupWeight(m), modelF = m.faces.size;
-    for (let k = this.built + 1; k <= Math.min(r, p.maxParts); k++) {
-      for (let leg = p.S; leg >= 0; leg--) {
-        const faces = p.rel[leg], here = p.loc[leg], row = at[leg];
-        for (let li = 0; li < faces.length; li++) {
-          const f = faces[li];
-          let best = Infinity;
-          if (k > 0 && f < modelF) {
-            for (let g = m.faceOut[f]; g < m.faceOut[f + 1]; g++) {
-              const lt = here[m.gTo[g]];
-              if (lt >= 0) best = Math.min(best, gw[g] + row[lt * W + k - 1]);
-            }
-          }
-          if (leg < p.S) {
-            for (const mt of p.exits[leg]) {
-              if (mt.entry === f) best = Math.min(best, weightOf(p.stations[mt.station].weightG) + at[leg + 1][p.loc[leg + 1][mt.exit] * W + k]);
-            }
-          } else if (k === 0 && f === p.camEntry) {
-            best = weightOf(p.req.camera.weightG);
-          }
-          row[li * W + k] = best;
-        }
-      }
-      this.built = k;
-    }
-  }
-}
 
 /**
  * The scalar form of the same relaxation, cheap enough to fill on every level: per leg,

@@ -19,12 +19,12 @@
 // is left out: it warns in every ordering.
 
 import { farthestUnvignettedMm } from "../optics";
-import { CleanSpan, LeastWeight, LIMIT_SLACK, weightOf } from "./clean-tables";
+import { CleanSpan, LIMIT_SLACK } from "./clean-tables";
 import { decodeStationMove } from "./moves";
 import type { Model } from "./model";
 import type { Problem, StationMount } from "./problem";
 import { type Limits, Reach, requestGrain } from "./reach";
-import type { Tables } from "./tables";
+import { type Tables, weightOf } from "./tables";
 import type { KidTest } from "./walker";
 import { loadLimitG, vignettingInputs } from "./warnings";
 
@@ -111,7 +111,7 @@ export function cleanPruner(p: Problem, t: Tables, need: { a: number; b: number 
   const opticsLimit = far(p.req.optics.clearApertureMm);
   const reach = vig && p.target !== null ? new Reach(p, p.hi, requestGrain(p), limits) : null;
   const span = vig ? new CleanSpan(p, limits) : null;
-  const least = maxLoad !== null ? new LeastWeight(p) : null;
+  const least = maxLoad !== null ? t.minWeight : null; // filled by the walker with the other tables
   const stationOf = (mv: number) => p.stations[decodeStationMove(mv).station];
 
   /**
@@ -120,7 +120,7 @@ export function cleanPruner(p: Problem, t: Tables, need: { a: number; b: number 
    */
   const open = (leg: number, li: number, r: number, cmin: number, cadj: number, weight: number, room: number): boolean => {
     const ti = li * W + r;
-    if (least && weight + least.at[leg][ti] > maxLoad! + 1e-9) return false;
+    if (least && weight + least[leg][ti] > maxLoad! + 1e-9) return false;
     if (!span) return true;
     const qlo = need.a - cmin - cadj, qhi = Math.min(need.b - cmin, room) + LIMIT_SLACK;
     if (span.min[leg][ti] > qhi || span.max[leg][ti] < qlo - LIMIT_SLACK) return false;
@@ -130,7 +130,6 @@ export function cleanPruner(p: Problem, t: Tables, need: { a: number; b: number 
   return {
     ensure(k) {
       span?.ensure(k);
-      least?.ensure(k);
     },
     sharpen: { level: () => (reach ? reach.level : Infinity), ensure: (k) => reach?.ensure(k) },
     enter(leg, li, r, cmin, cadj, moves) {

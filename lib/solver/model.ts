@@ -34,6 +34,8 @@ export type Model = {
   gMaxLenAdj: Float64Array;
   gMaxAdj: Float64Array;
   gMinPrice: Float64Array;
+  /** Least weight of the group's parts (unknown = 0, as the load warning counts it). */
+  gMinWeight: Float64Array;
   /** Groups leaving face f: [faceOut[f], faceOut[f + 1]). */
   faceOut: Int32Array;
   /** Groups entering face f: inGroups[faceIn[f] .. faceIn[f + 1]). */
@@ -110,16 +112,18 @@ export function buildModel(parts: readonly Part[]): Model {
   const G = groups.length;
   const gFrom = new Int32Array(G), gTo = new Int32Array(G), gStart = new Int32Array(G), gEnd = new Int32Array(G);
   const gMinLen = new Float64Array(G), gMaxLenAdj = new Float64Array(G), gMaxAdj = new Float64Array(G), gMinPrice = new Float64Array(G);
+  const gMinWeight = new Float64Array(G);
   for (let g = 0; g < G; g++) {
     const s = groups[g], e = g + 1 < G ? groups[g + 1] : n;
     gFrom[g] = oFrom[s]; gTo[g] = oTo[s]; gStart[g] = s; gEnd[g] = e; gMinLen[g] = oLen[s];
-    let maxLA = 0, maxA = 0, minP = Infinity;
+    let maxLA = 0, maxA = 0, minP = Infinity, minW = Infinity;
     for (let k = s; k < e; k++) {
       if (oLen[k] + oAdj[k] > maxLA) maxLA = oLen[k] + oAdj[k];
       if (oAdj[k] > maxA) maxA = oAdj[k];
       if (oPrice[k] < minP) minP = oPrice[k];
+      minW = Math.min(minW, weight[oPart[k]]);
     }
-    gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP;
+    gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP; gMinWeight[g] = minW;
   }
 
   const F = faces.size;
@@ -137,7 +141,7 @@ export function buildModel(parts: readonly Part[]): Model {
   const grainMm = g1 === null || g2 === null ? null : grainOf([g1, g2]);
   const model: Omit<Model, "graph" | "buildMs"> = {
     parts, faces, quantity, aperture, weight, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
-    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn, grainMm,
+    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, gMinWeight, faceOut, inGroups, faceIn, grainMm,
   };
   const graph = buildFaceGraph(model);
   return { ...model, graph, buildMs: performance.now() - t0 };
