@@ -53,6 +53,18 @@ export function requiredClearApertureMm(sensorDiagonalMm: number, distanceToSens
 }
 
 /**
+ * The inverse of requiredClearApertureMm: the farthest in front of the sensor a part with
+ * this clear aperture can stand before it cuts the cone, (aperture − diagonal)·N. Negative
+ * when the part is narrower than the sensor diagonal (it vignettes anywhere).
+ */
+export function farthestUnvignettedMm(clearApertureMm: number, sensorDiagonalMm: number, focalRatio: number): number {
+  requireNonNegative(sensorDiagonalMm, "Sensor diagonal");
+  requirePositive(focalRatio, "Focal ratio");
+  if (!Number.isFinite(clearApertureMm)) throw new RangeError("Clear aperture must be a number");
+  return (clearApertureMm - sensorDiagonalMm) * focalRatio;
+}
+
+/**
  * Critical focus zone, total depth in micrometres. Factor used: 4.88·λ·N² (the total
  * depth for a quarter-wave focus error); other sources use 2·λ·N² or 2.44·λ·N², so the
  * number is a guide to how fine focusing must be, not a tolerance for spacing.

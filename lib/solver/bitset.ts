@@ -98,3 +98,18 @@ export function lastSetIn(bits: Bits, from: number, to: number): number {
     v = bits[i];
   }
 }
+
+/** Clear every bit above `top` (all of them when top < 0). */
+export function clearAbove(bits: Bits, top: number): void {
+  if (top < 0) { bits.fill(0); return; }
+  const w = top >>> 5;
+  if (w >= bits.length) return;
+  const keep = top & 31;
+  if (keep < 31) bits[w] &= (1 << (keep + 1)) - 1;
+  bits.fill(0, w + 1);
+}
+
+/** dst |= src. */
+export function orInto(dst: Bits, src: Bits): void {
+  for (let i = 0; i < dst.length; i++) dst[i] |= src[i];
+}

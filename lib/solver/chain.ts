@@ -2,7 +2,7 @@
 // parts set nearest the target, or at their minimum), start positions, joints and warnings.
 
 import type { Problem } from "./problem";
-import { decodeStationMove } from "./topk";
+import { decodeStationMove } from "./moves";
 import type { Chain, Part, Step } from "./types";
 import { countDetours } from "./detours";
 import { chainWarnings } from "./warnings";

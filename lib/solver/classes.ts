@@ -3,6 +3,7 @@
 // Built once per model (so once per parts array), with every part's orientations.
 
 import type { Model } from "./model";
+import { cmpPrice } from "./topk";
 import type { Part } from "./types";
 
 export type Classes = {
@@ -37,7 +38,7 @@ export function getClasses(m: Model): Classes {
     members[c].push(i);
   }
   const price = (i: number) => m.parts[i].priceCents ?? Infinity;
-  for (const list of members) list.sort((a, b) => (price(a) === price(b) ? a - b : price(a) < price(b) ? -1 : 1));
+  for (const list of members) list.sort((a, b) => cmpPrice(price(a), price(b)) || a - b);
   const out = { classOf, members, orients };
   cache.set(m, out);
   return out;

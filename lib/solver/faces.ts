@@ -6,6 +6,15 @@ import type { Gender, Port } from "./types";
 
 export const opposite = (g: Gender): Gender => (g === "male" ? "female" : "male");
 
+/**
+ * True when a part may be mounted back to front *and* that is another orientation: a
+ * reversible part with the same port on both faces mounts the same way round either way.
+ */
+export function turnsAround(p: { front: Port | null; rear: Port | null; reversible?: boolean }): boolean {
+  if (!p.reversible || !p.front || !p.rear) return false;
+  return p.front.interface !== p.rear.interface || p.front.gender !== p.rear.gender;
+}
+
 export class FaceTable {
   /** interface → [male id, female id] (-1 when not interned yet). */
   private readonly ids = new Map<string, [number, number]>();

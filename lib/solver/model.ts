@@ -2,8 +2,9 @@
 // open faces, sorted and grouped by (from, to). Built once per parts array and cached.
 
 import type DirectedGraphType from "graphology";
-import { FaceTable } from "./faces";
+import { FaceTable, turnsAround } from "./faces";
 import { buildFaceGraph } from "./graph";
+import { cmpPrice } from "./topk";
 import type { Part } from "./types";
 
 export type Model = {
@@ -11,6 +12,10 @@ export type Model = {
   faces: FaceTable;
   /** Per part: most uses in one chain (Infinity = unlimited). */
   quantity: Float64Array;
+  /** Per part: clearApertureMm, NaN when it has none (it never vignettes). */
+  aperture: Float64Array;
+  /** Per part: weightG, 0 when unknown (as the load warning counts it). */
+  weight: Float64Array;
   // Orientations, sorted by (from, to, length, price, part).
   oPart: Int32Array;
   oRev: Uint8Array;
@@ -29,6 +34,8 @@ export type Model = {
   gMaxLenAdj: Float64Array;
   gMaxAdj: Float64Array;
   gMinPrice: Float64Array;
+  /** Least weight of the group's parts (unknown = 0, as the load warning counts it). */
+  gMinWeight: Float64Array;
   /** Groups leaving face f: [faceOut[f], faceOut[f + 1]). */
   faceOut: Int32Array;
   /** Groups entering face f: inGroups[faceIn[f] .. faceIn[f + 1]). */
@@ -66,6 +73,7 @@ export function buildModel(parts: readonly Part[]): Model {
   const t0 = performance.now();
   const faces = new FaceTable();
   const quantity = new Float64Array(parts.length);
+  const aperture = new Float64Array(parts.length), weight = new Float64Array(parts.length);
   const cap = parts.length * 2;
   const rPart = new Int32Array(cap), rRev = new Uint8Array(cap), rFrom = new Int32Array(cap), rTo = new Int32Array(cap);
   const rLen = new Float64Array(cap), rAdj = new Float64Array(cap), rPrice = new Float64Array(cap);
@@ -73,13 +81,14 @@ export function buildModel(parts: readonly Part[]): Model {
   for (let i = 0; i < parts.length; i++) {
     const p = parts[i];
     quantity[i] = p.quantity === undefined ? Infinity : Math.floor(p.quantity);
+    aperture[i] = typeof p.clearApertureMm === "number" ? p.clearApertureMm : Number.NaN;
+    weight[i] = typeof p.weightG === "number" ? p.weightG : 0;
     if (!usableConnector(p)) continue;
     const front = p.front!, rear = p.rear!;
     const len = p.lengthMm, adj = Math.max(0, p.adjustMm ?? 0), price = p.priceCents ?? Infinity;
     rPart[n] = i; rRev[n] = 0; rFrom[n] = faces.entryOf(front); rTo[n] = faces.exitOf(rear);
     rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
-    const symmetric = front.interface === rear.interface && front.gender === rear.gender;
-    if (p.reversible && !symmetric) {
+    if (turnsAround(p)) {
       rPart[n] = i; rRev[n] = 1; rFrom[n] = faces.entryOf(rear); rTo[n] = faces.exitOf(front);
       rLen[n] = len; rAdj[n] = adj; rPrice[n] = price; n++;
     }
@@ -103,16 +112,18 @@ export function buildModel(parts: readonly Part[]): Model {
   const G = groups.length;
   const gFrom = new Int32Array(G), gTo = new Int32Array(G), gStart = new Int32Array(G), gEnd = new Int32Array(G);
   const gMinLen = new Float64Array(G), gMaxLenAdj = new Float64Array(G), gMaxAdj = new Float64Array(G), gMinPrice = new Float64Array(G);
+  const gMinWeight = new Float64Array(G);
   for (let g = 0; g < G; g++) {
     const s = groups[g], e = g + 1 < G ? groups[g + 1] : n;
     gFrom[g] = oFrom[s]; gTo[g] = oTo[s]; gStart[g] = s; gEnd[g] = e; gMinLen[g] = oLen[s];
-    let maxLA = 0, maxA = 0, minP = Infinity;
+    let maxLA = 0, maxA = 0, minP = Infinity, minW = Infinity;
     for (let k = s; k < e; k++) {
       if (oLen[k] + oAdj[k] > maxLA) maxLA = oLen[k] + oAdj[k];
       if (oAdj[k] > maxA) maxA = oAdj[k];
       if (oPrice[k] < minP) minP = oPrice[k];
+      minW = Math.min(minW, weight[oPart[k]]);
     }
-    gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP;
+    gMaxLenAdj[g] = maxLA; gMaxAdj[g] = maxA; gMinPrice[g] = minP; gMinWeight[g] = minW;
   }
 
   const F = faces.size;
@@ -129,15 +140,11 @@ export function buildModel(parts: readonly Part[]): Model {
   const g1 = grainOf(oLen), g2 = grainOf(oAdj);
   const grainMm = g1 === null || g2 === null ? null : grainOf([g1, g2]);
   const model: Omit<Model, "graph" | "buildMs"> = {
-    parts, faces, quantity, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
-    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, faceOut, inGroups, faceIn, grainMm,
+    parts, faces, quantity, aperture, weight, oPart, oRev, oFrom, oTo, oLen, oAdj, oPrice,
+    gFrom, gTo, gStart, gEnd, gMinLen, gMaxLenAdj, gMaxAdj, gMinPrice, gMinWeight, faceOut, inGroups, faceIn, grainMm,
   };
   const graph = buildFaceGraph(model);
   return { ...model, graph, buildMs: performance.now() - t0 };
-}
-
-export function cmpPrice(a: number, b: number): number {
-  return a === b ? 0 : a < b ? -1 : 1;
 }
 
 const cache = new WeakMap<readonly Part[], Model>();

@@ -6,7 +6,7 @@
 import { materialize } from "./chain";
 import { getClasses } from "./classes";
 import type { Problem } from "./problem";
-import { stationMove } from "./topk";
+import { stationMove } from "./moves";
 import type { Chain } from "./types";
 
 export type Ordered = { moves: number[]; chain: Chain; warned: boolean; detours: number };

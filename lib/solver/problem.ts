@@ -2,7 +2,7 @@
 // and for every leg (segment between stations) the faces that can lie on a full chain.
 
 import { totalFilterShiftMm } from "../optics";
-import type { FaceTable } from "./faces";
+import { type FaceTable, turnsAround } from "./faces";
 import { getModel, type Model } from "./model";
 import {
   DEFAULT_MAX_PARTS, DEFAULT_MAX_SOLUTIONS, DEFAULT_TOLERANCE_MM, LENGTH_SLACK_MM,
@@ -58,8 +58,7 @@ function mountsOf(faces: FaceTable, p: Part, station: number): StationMount[] {
   const out: StationMount[] = [
     { station, rev: false, entry: faces.entryOf(p.front), exit: faces.exitOf(p.rear), len: p.lengthMm, adj },
   ];
-  const symmetric = p.front.interface === p.rear.interface && p.front.gender === p.rear.gender;
-  if (p.reversible && !symmetric) {
+  if (turnsAround(p)) {
     out.push({ station, rev: true, entry: faces.entryOf(p.rear), exit: faces.exitOf(p.front), len: p.lengthMm, adj });
   }
   return out;

@@ -7,10 +7,26 @@
 // adjustable ranges stays exact. "Coarse": bucket b = floor(length / w); a path of n items
 // whose buckets add to B has a true length in [w·B, w·(B + n)); we widen that to
 // [w·(B − n − 1), w·(B + 2n + 2)) so that float rounding of a bucket can never cut it.
+//
+// With limits (clean.ts), an item may only stand where the length to go from its front to
+// the sensor is at most its limit (the farthest it clears the beam): after an item is added,
+// every bucket whose least possible length is above the limit is cleared. A bucket is kept
+// when any length in it might pass, so the filter never drops a feasible finish.
 
-import { type Bits, firstSetIn, isEmpty, lastSetIn, orShift, orShiftRange, popcount, forEachBit, setRange } from "./bitset";
+import { type Bits, clearAbove, firstSetIn, forEachBit, isEmpty, lastSetIn, orInto, orShift, orShiftRange, popcount, setRange } from "./bitset";
 import { isMultiple } from "./model";
-import type { Problem } from "./problem";
+import type { Problem, StationMount } from "./problem";
+
+/** The farthest from the sensor (mm, front of the item to the sensor) each item may stand; Infinity = anywhere. */
+export type Limits = {
+  /** Per model orientation. */
+  orient(o: number): number;
+  mount(mt: StationMount): number;
+  camera: number;
+};
+
+/** A group's orientations that share one limit, as merged bit ranges. */
+type Band = { limit: number; ranges: Int32Array };
 
 const MAX_GRID_BITS = 8192;
 const COARSE_BITS = 2048;
@@ -23,8 +39,10 @@ export class Reach {
   private readonly bits: (Bits | null)[][][] = []; // [leg][r][local face]
   private readonly pops: Int32Array[][] = [];
   private readonly groupRanges = new Map<number, Int32Array>();
-  private readonly groupBits = new Map<number, Bits>();
+  private readonly groupBands = new Map<number, Band[]>();
+  private readonly rangeBits = new Map<Int32Array, Bits>();
   private readonly tmp: Bits;
+  private readonly capped: Bits;
   private built = -1;
   /** Highest level (parts left) with bitsets; beyond it queries answer "maybe". */
   get level(): number {
@@ -33,12 +51,13 @@ export class Reach {
   /** Padding on every query: grid sums are exact to float noise, coarse ones are padded anyway. */
   private readonly eps: number;
 
-  constructor(private readonly p: Problem, readonly capMm: number, grain: number | null) {
+  constructor(private readonly p: Problem, readonly capMm: number, grain: number | null, private readonly limits: Limits | null = null) {
     this.grid = grain !== null && (2 * capMm) / grain <= MAX_GRID_BITS;
     this.step = this.grid ? grain! : Math.max(capMm / COARSE_BITS, 1e-4);
     this.nb = this.grid ? 2 * Math.ceil(capMm / grain! + 1e-9) + 2 : Math.floor(capMm / this.step) + 2;
     this.words = (this.nb + 31) >>> 5;
     this.tmp = new Uint32Array(this.words);
+    this.capped = new Uint32Array(this.words);
     this.eps = this.grid ? 1e-8 : 1e-7;
     for (let leg = 0; leg <= p.S; leg++) { this.bits.push([]); this.pops.push([]); }
   }
@@ -47,12 +66,11 @@ export class Reach {
     return this.grid ? 2 * Math.round(mm / this.step) : Math.floor(mm / this.step);
   }
 
-  private rangesOf(g: number): Int32Array {
-    let r = this.groupRanges.get(g);
-    if (r) return r;
+  /** Merged bit ranges [lo, hi] of these orientations (in length order) of one group. */
+  private rangesOfOrients(orients: Iterable<number>): Int32Array {
     const m = this.p.model;
     const out: number[] = [];
-    for (let o = m.gStart[g]; o < m.gEnd[g]; o++) {
+    for (const o of orients) {
       const lo = this.bitOf(m.oLen[o]);
       if (lo >= this.nb) break; // sorted by length: the rest are longer still
       const hi = Math.min(this.nb - 1, this.bitOf(m.oLen[o] + m.oAdj[o]));
@@ -60,25 +78,76 @@ export class Reach {
       if (n && lo <= out[n - 1] + 1) out[n - 1] = Math.max(out[n - 1], hi);
       else out.push(lo, hi);
     }
-    r = Int32Array.from(out);
-    this.groupRanges.set(g, r);
+    return Int32Array.from(out);
+  }
+
+  private rangesOf(g: number): Int32Array {
+    let r = this.groupRanges.get(g);
+    if (!r) {
+      const m = this.p.model;
+      const orients = function* () { for (let o = m.gStart[g]; o < m.gEnd[g]; o++) yield o; };
+      r = this.rangesOfOrients(orients());
+      this.groupRanges.set(g, r);
+    }
     return r;
   }
 
-  private convolve(dst: Bits, src: Bits, srcPop: number, ranges: Int32Array, g: number): void {
+  /**
+   * A group's orientations by limit, least first; every limit too far to ever clear a bucket
+   * (even for a lone camera) is folded into one unlimited band.
+   */
+  private bandsOf(g: number): Band[] {
+    let bands = this.groupBands.get(g);
+    if (bands) return bands;
+    const m = this.p.model, limits = this.limits!;
+    const byLimit = new Map<number, number[]>();
+    for (let o = m.gStart[g]; o < m.gEnd[g]; o++) {
+      const own = limits.orient(o);
+      const l = this.topBit(own, 1) >= this.nb - 1 ? Infinity : own;
+      let list = byLimit.get(l);
+      if (!list) byLimit.set(l, (list = []));
+      list.push(o);
+    }
+    bands = [...byLimit].sort((a, b) => a[0] - b[0]).map(([l, orients]) => ({ limit: l, ranges: this.rangesOfOrients(orients) }));
+    this.groupBands.set(g, bands);
+    return bands;
+  }
+
+  /**
+   * The highest bit that may hold a length to go of at most `limit` mm, for n items: the
+   * lowest length a bucket can stand for is its least (grid: exact, coarse: widened by n + 1).
+   */
+  private topBit(limit: number, n: number): number {
+    if (limit === Infinity) return this.nb - 1;
+    const l = limit + this.eps;
+    const top = this.grid ? 2 * Math.floor(l / this.step) + 1 : Math.floor(l / this.step) + n + 1;
+    return Math.min(this.nb - 1, top);
+  }
+
+  private convolve(dst: Bits, src: Bits, srcPop: number, ranges: Int32Array): void {
     const count = ranges.length >> 1;
     if (count <= 2 || count <= srcPop) {
       for (let i = 0; i < ranges.length; i += 2) orShiftRange(dst, src, ranges[i], ranges[i + 1] - ranges[i], this.tmp);
       return;
     }
-    let lg = this.groupBits.get(g);
-    if (!lg) {
-      lg = new Uint32Array(this.words);
-      for (let i = 0; i < ranges.length; i += 2) setRange(lg, ranges[i], ranges[i + 1]);
-      this.groupBits.set(g, lg);
+    let offsets = this.rangeBits.get(ranges);
+    if (!offsets) {
+      offsets = new Uint32Array(this.words);
+      for (let i = 0; i < ranges.length; i += 2) setRange(offsets, ranges[i], ranges[i + 1]);
+      this.rangeBits.set(ranges, offsets);
     }
-    const offsets = lg;
-    forEachBit(src, (b) => orShift(dst, offsets, b));
+    const lg = offsets;
+    forEachBit(src, (b) => orShift(dst, lg, b));
+  }
+
+  /** dst |= (src shifted by the ranges), keeping only bits up to `top`. */
+  private convolveUpTo(dst: Bits, src: Bits, srcPop: number, ranges: Int32Array, top: number): void {
+    if (top < 0 || ranges.length === 0 || ranges[0] > top) return;
+    if (top >= this.nb - 1) { this.convolve(dst, src, srcPop, ranges); return; }
+    this.capped.fill(0);
+    this.convolve(this.capped, src, srcPop, ranges);
+    clearAbove(this.capped, top);
+    orInto(dst, this.capped);
   }
 
   /** Make sure bitsets exist for every r up to `r`. */
@@ -96,13 +165,13 @@ export class Reach {
           let acc: Bits | null = null;
           if (k > 0 && f < modelF) {
             const prev = this.bits[leg][k - 1], prevPop = this.pops[leg][k - 1];
+            const n = this.items(leg, k);
             for (let g = m.faceOut[f]; g < m.faceOut[f + 1]; g++) {
               const lt = here[m.gTo[g]];
               if (lt < 0 || !prev[lt]) continue;
-              const ranges = this.rangesOf(g);
-              if (ranges.length === 0) continue;
               acc ??= new Uint32Array(this.words);
-              this.convolve(acc, prev[lt]!, prevPop[lt], ranges, g);
+              if (!this.limits) this.convolve(acc, prev[lt]!, prevPop[lt], this.rangesOf(g));
+              else for (const band of this.bandsOf(g)) this.convolveUpTo(acc, prev[lt]!, prevPop[lt], band.ranges, this.topBit(band.limit, n));
             }
           }
           if (leg < p.S) {
@@ -113,11 +182,13 @@ export class Reach {
               const lo = this.bitOf(mt.len);
               if (lo >= this.nb) continue;
               acc ??= new Uint32Array(this.words);
-              orShiftRange(acc, src, lo, Math.min(this.nb - 1, this.bitOf(mt.len + mt.adj)) - lo, this.tmp);
+              const range = Int32Array.of(lo, Math.min(this.nb - 1, this.bitOf(mt.len + mt.adj)));
+              this.convolveUpTo(acc, src, Infinity, range, this.limits ? this.topBit(this.limits.mount(mt), this.items(leg, k)) : this.nb - 1);
             }
           } else if (k === 0 && f === p.camEntry) {
             acc = new Uint32Array(this.words);
-            setRange(acc, this.bitOf(p.camLen), Math.min(this.nb - 1, this.bitOf(p.camLen + p.camAdj)));
+            const top = this.limits ? this.topBit(this.limits.camera, 1) : this.nb - 1;
+            setRange(acc, this.bitOf(p.camLen), Math.min(top, this.bitOf(p.camLen + p.camAdj)));
           }
           if (acc && !isEmpty(acc)) { row[li] = acc; pops[li] = popcount(acc); }
         }

@@ -9,54 +9,14 @@
 // ordering exactly (orderings.ts) before it is ranked.
 
 import { getClasses } from "./classes";
-import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, type Ordered, spend } from "./orderings";
-import type { Problem } from "./problem";
+import { cleanPruner, everyChainWarned, warningsPossible } from "./clean";
+import { bestOrdering, better, containsBetter, dress, OUT_OF_WORK, spend } from "./orderings";
+import { type Problem, WORK_LIMIT } from "./problem";
 import { Reach, requestGrain } from "./reach";
 import type { Tables } from "./tables";
-import { decodeStationMove, RANK_EPS } from "./topk";
+import { cmpBound, cmpEntry, type Entry, GeoTop, RANK_EPS } from "./topk";
 import type { Chain } from "./types";
 import { type Bound, Walker } from "./walker";
-
-export type Entry = {
-  warned: boolean; k: number; detours: number; err: number; price: number; d: number;
-  msKey: string; geoKey: string; counts: Map<number, number>; ord: Ordered;
-};
-
-const cmpLen = (a: number, b: number) => (Math.abs(a - b) <= RANK_EPS ? 0 : a < b ? -1 : 1);
-const cmpPrice = (a: number, b: number) => (a === b ? 0 : a < b ? -1 : 1);
-
-export function cmpEntry(a: Entry, b: Entry): number {
-  return (a.warned === b.warned ? 0 : a.warned ? 1 : -1) || a.k - b.k || a.detours - b.detours ||
-    cmpLen(a.err, b.err) || cmpPrice(a.price, b.price) || cmpLen(a.d, b.d) ||
-    (a.msKey < b.msKey ? -1 : a.msKey > b.msKey ? 1 : 0);
-}
-
-/** A relaxed bound (detours taken as 0) against an entry of the same phase and level. */
-function cmpBound(b: Bound, worst: Entry): number {
-  if (worst.detours > 0) return -1;
-  return cmpLen(b.err, worst.err) || cmpPrice(b.price, worst.price) || cmpLen(b.d, worst.d);
-}
-
-/** The best `capacity` geometries, each held by its best multiset so far. */
-class GeoTop {
-  readonly items: Entry[] = [];
-  private readonly byGeo = new Map<string, Entry>();
-  constructor(readonly capacity: number) {}
-  get full(): boolean { return this.items.length >= this.capacity; }
-  get worst(): Entry | undefined { return this.items[this.items.length - 1]; }
-  offer(e: Entry): void {
-    const prev = this.byGeo.get(e.geoKey);
-    if (prev) {
-      if (cmpEntry(e, prev) >= 0) return;
-      this.items.splice(this.items.indexOf(prev), 1);
-    } else if (this.full && cmpEntry(e, this.worst!) >= 0) return;
-    let i = this.items.length;
-    while (i > 0 && cmpEntry(e, this.items[i - 1]) < 0) i--;
-    this.items.splice(i, 0, e);
-    this.byGeo.set(e.geoKey, e);
-    if (this.items.length > this.capacity) this.byGeo.delete(this.items.pop()!.geoKey);
-  }
-}
 
 function keysOf(p: Problem, counts: ReadonlyMap<number, number>): { msKey: string; geoKey: string } {
   const { classOf } = getClasses(p.model);
@@ -69,13 +29,6 @@ function countsOf(p: Problem, moves: readonly number[]): Map<number, number> {
   const counts = new Map<number, number>();
   for (const mv of moves) if (mv >= 0) { const part = p.model.oPart[mv]; counts.set(part, (counts.get(part) ?? 0) + 1); }
   return counts;
-}
-
-/** Can any chain of this request be warned at all? (Otherwise phase two has nothing to find.) */
-function warningsPossible(p: Problem): boolean {
-  const { optics, camera } = p.req;
-  const vignetting = typeof optics.focalRatio === "number" && optics.focalRatio > 0 && typeof camera.sensorDiagonalMm === "number";
-  return vignetting || (typeof optics.maxLoadG === "number" && Number.isFinite(optics.maxLoadG));
 }
 
 /**
@@ -97,76 +50,14 @@ function entryFor(p: Problem, counts: Map<number, number>, moves: readonly numbe
 }
 
 /**
- * Exact-safe test for phase one: false when the chain so far is certainly warned, whatever
- * follows. A step's distance to the sensor is at least the least length of itself and all
- * after it, and (with a target) at least lo minus the most its start can be. Same-face
- * spacers are skipped: the walk puts them at a face's first arrival, but the multiset's best
- * ordering may move them nearer the sensor (which only moves the other steps further away).
+ * phaseOneShare: phase one's share of the request's work. It no longer has to walk the
+ * window's warned chains to prove that no clean one exists (clean.ts prunes every state with
+ * no clean way into the window), so this is only the k-SUM safety net of WORK_LIMIT, split so
+ * that phase two still answers: past it the answer is flagged `truncated` and phase two (which
+ * then also takes clean chains) goes on with the rest. Tests set it low to show that phase one
+ * stays small where the window is full of warned chains.
  */
-function certainlyWarnedCheck(p: Problem, t: Tables): ((leg: number, li: number, r: number, moves: readonly number[]) => boolean) | null {
-  const { optics, camera } = p.req;
-  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
-  const vig = typeof N === "number" && N > 0 && typeof s === "number" && s >= 0;
-  const maxLoad = optics.maxLoadG;
-  const allW = [...p.model.parts, ...p.stations, camera].every((x) => x.weightG === undefined || x.weightG >= 0);
-  const load = typeof maxLoad === "number" && Number.isFinite(maxLoad) && allW;
-  if (!vig && !load) return null;
-  const m = p.model, W = t.R + 1;
-  const lens: number[] = [], adjs: number[] = [], cas: (number | undefined)[] = [], loops: boolean[] = [];
-  return (leg, li, r, moves) => {
-    if (li < 0) return true;
-    const restMin = t.minLen[leg][li * W + r];
-    if (restMin === Infinity) return true;
-    lens.length = 0; adjs.length = 0; cas.length = 0; loops.length = 0;
-    let weight = camera.weightG ?? 0;
-    for (const mv of moves) {
-      let part;
-      if (mv >= 0) { part = m.parts[m.oPart[mv]]; lens.push(m.oLen[mv]); adjs.push(m.oAdj[mv]); loops.push(m.oFrom[mv] === m.oTo[mv]); }
-      else { part = p.stations[decodeStationMove(mv).station]; lens.push(part.lengthMm); adjs.push(Math.max(0, part.adjustMm ?? 0)); loops.push(false); }
-      cas.push(part.clearApertureMm);
-      weight += part.weightG ?? 0;
-    }
-    if (load && weight > maxLoad! + 1e-9) return false;
-    if (!vig) return true;
-    let tail = restMin;
-    let startMax = 0;
-    for (let i = 0; i < lens.length; i++) startMax += lens[i] + adjs[i];
-    for (let i = lens.length - 1; i >= 0; i--) {
-      tail += lens[i];
-      startMax -= lens[i] + adjs[i];
-      const ca = cas[i];
-      if (ca === undefined || loops[i]) continue;
-      const d = Math.max(tail, p.lo - startMax);
-      if (ca < s! + Math.max(0, d) / N! - 1e-9) return false;
-    }
-    return true;
-  };
-}
-
-/** True when every chain is warned: the camera's own opening, the optics' rear, or the fixed load. */
-function everyChainWarned(p: Problem): boolean {
-  const { optics, camera } = p.req;
-  const N = optics.focalRatio, s = camera.sensorDiagonalMm;
-  if (typeof N === "number" && N > 0 && typeof s === "number" && s >= 0) {
-    if (camera.clearApertureMm !== undefined && camera.clearApertureMm < s + p.camLen / N - 1e-9) return true;
-    if (optics.clearApertureMm !== undefined && optics.clearApertureMm < s + Math.max(0, p.lo) / N - 1e-9) return true;
-    // A station is at least its own length, the later stations' and the camera's from the sensor.
-    let tail = p.camLen;
-    for (let j = p.stations.length - 1; j >= 0; j--) {
-      const st = p.stations[j];
-      tail += st.lengthMm;
-      if (st.clearApertureMm !== undefined && st.clearApertureMm < s + tail / N - 1e-9) return true;
-    }
-  }
-  const fixed = [...p.stations, camera];
-  if (typeof optics.maxLoadG === "number" && fixed.every((x) => (x.weightG ?? 0) >= 0) && [...p.model.parts].every((x) => (x.weightG ?? 0) >= 0)) {
-    if (fixed.reduce((w, x) => w + (x.weightG ?? 0), 0) > optics.maxLoadG + 1e-9) return true;
-  }
-  return false;
-}
-
-/** Search states phase one (clean chains only) may use before the answer is flagged truncated. */
-export const PHASE_ONE_LIMIT = 20_000;
+export const searchTuning = { phaseOneShare: WORK_LIMIT / 2 };
 
 export function searchSolutions(p: Problem, t: Tables): Chain[] {
   const T = p.target;
@@ -179,10 +70,14 @@ export function searchSolutions(p: Problem, t: Tables): Chain[] {
   const need = T === null ? { a: -Infinity, b: Infinity } : { a: p.lo, b: p.hi };
   const W = t.R + 1;
 
-  const certain = certainlyWarnedCheck(p, t);
+  const clean = cleanPruner(p, t, need);
   const walker = new Walker(p, t, reach, {
     need: () => need,
-    alive: certain ? (leg, li, r, moves) => phase !== "unwarned" || certain(leg, li, r, moves) : undefined,
+    enter: clean ? (leg, li, r, cmin, cadj, moves) => phase !== "unwarned" || clean.enter(leg, li, r, cmin, cadj, moves) : undefined,
+    sharpen: clean ? {
+      level: () => (phase === "unwarned" ? clean.sharpen.level() : Infinity),
+      ensure: (k) => { if (phase === "unwarned") clean.sharpen.ensure(k); },
+    } : undefined,
     order: {
       bound(leg, li, r, cmin, cadj, price): Bound | null {
         const ti = li * W + r;
@@ -231,14 +126,17 @@ export function searchSolutions(p: Problem, t: Tables): Chain[] {
       if (ph === "warned" && (heads.length >= p.maxSolutions || !warningsPossible(p))) break;
       if (ph === "unwarned" && everyChainWarned(p)) continue;
       phase = ph;
-      // Phase one may find nothing while the window is full of warned chains, and then it must
-      // walk every level to prove it. It gets its own share of the work; past that the answer
-      // is flagged `truncated` and phase two (which also takes clean chains then) goes on.
       const rest = p.work.left;
-      if (ph === "unwarned") p.work.left = Math.min(rest, PHASE_ONE_LIMIT);
+      const share = searchTuning.phaseOneShare;
+      if (ph === "unwarned") p.work.left = Math.min(rest, share);
       try {
         for (k = 0; k <= p.maxParts && heads.length < p.maxSolutions && !p.work.exhausted; k++) {
           top = new GeoTop(p.maxSolutions - heads.length);
+          if (ph === "unwarned" && clean) {
+            clean.ensure(k);
+            // Once phase one needed its bitsets, the next level needs them too: build them now.
+            if (clean.sharpen.level() >= 0) clean.sharpen.ensure(k);
+          }
           walker.run(k);
           heads.push(...top.items);
         }
@@ -248,10 +146,11 @@ export function searchSolutions(p: Problem, t: Tables): Chain[] {
       }
       if (ph === "unwarned") {
         for (const h of heads) unwarnedGeos.add(h.geoKey);
+        // Phase two goes on with what the request has left, not with what is left of the share.
+        p.work.left = Math.max(0, rest - (Math.min(rest, share) - Math.max(0, p.work.left)));
         if (p.work.exhausted) {
           cut = true;
           p.work.exhausted = false;
-          p.work.left = rest - PHASE_ONE_LIMIT;
           phase = "after-cut";
         }
       }

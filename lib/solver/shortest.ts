@@ -7,7 +7,7 @@ import { dijkstra } from "graphology-shortest-path";
 import type { Model } from "./model";
 import type { Problem } from "./problem";
 import type { Tables } from "./tables";
-import { stationMove } from "./topk";
+import { stationMove } from "./moves";
 
 type LegPath = { len: number; moves: number[] } | null;
 
@@ -148,11 +148,9 @@ export function constrainedShortest(p: Problem, t: Tables, ignoreStock = false):
     onPath[leg][f] = 1;
     for (const kid of kids) {
       if (kid.f >= best) break;
+      // Stock was checked when the kids were listed: every sibling's walk puts back what it took.
       const part = kid.move >= 0 ? m.oPart[kid.move] : -1;
-      if (part >= 0) {
-        if (!ignoreStock && used[part] >= m.quantity[part]) continue;
-        used[part]++;
-      }
+      if (part >= 0) used[part]++;
       moves.push(kid.move);
       dfs(kid.leg, kid.next, cmin + kid.len, kid.u);
       moves.pop();

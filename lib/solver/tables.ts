@@ -1,9 +1,14 @@
 // Relaxed bounds on the rest of a chain, ignoring stock: for every leg, relevant face and
 // exact number r of connecting parts still to place, the least length, the most length
-// (adjustable parts fully out) and the least price of a way to finish at the camera.
+// (adjustable parts fully out) and the least price of a way to finish at the camera, and
+// when the load is judged its least weight (camera included; unknown weights count 0).
 // Levels are filled on demand: a search that stops at 3 parts never pays for 10.
 
 import type { Problem } from "./problem";
+import { loadLimitG } from "./warnings";
+
+/** A weight as the load warning counts it: unknown = 0. */
+export const weightOf = (w: number | undefined): number => (typeof w === "number" ? w : 0);
 
 export class Tables {
   readonly R: number;
@@ -11,6 +16,7 @@ export class Tables {
   readonly minLen: Float64Array[];
   readonly maxLen: Float64Array[];
   readonly minPrice: Float64Array[];
+  readonly minWeight: Float64Array[] | null;
   private built = -1;
   private atMost: Float64Array[] | null = null;
 
@@ -20,6 +26,7 @@ export class Tables {
     this.minLen = p.rel.map((r) => new Float64Array(r.length * W).fill(Infinity));
     this.maxLen = p.rel.map((r) => new Float64Array(r.length * W).fill(-Infinity));
     this.minPrice = p.rel.map((r) => new Float64Array(r.length * W).fill(Infinity));
+    this.minWeight = loadLimitG(p) === null ? null : p.rel.map((r) => new Float64Array(r.length * W).fill(Infinity));
   }
 
   /** Fill every level up to r parts. */
@@ -28,14 +35,14 @@ export class Tables {
     const { model: m, S, rel, loc, exits } = p;
     const W = this.R + 1;
     const modelF = m.faces.size;
-    const { minLen, maxLen, minPrice } = this;
+    const { minLen, maxLen, minPrice, minWeight } = this;
     for (let k = this.built + 1; k <= Math.min(r, this.R); k++) {
       for (let leg = S; leg >= 0; leg--) {
         const faces = rel[leg], here = loc[leg];
-        const mnL = minLen[leg], mxL = maxLen[leg], mnP = minPrice[leg];
+        const mnL = minLen[leg], mxL = maxLen[leg], mnP = minPrice[leg], mnW = minWeight?.[leg];
         for (let li = 0; li < faces.length; li++) {
           const f = faces[li];
-          let mn = Infinity, mx = -Infinity, mp = Infinity;
+          let mn = Infinity, mx = -Infinity, mp = Infinity, mw = Infinity;
           if (k > 0 && f < modelF) {
             for (let g = m.faceOut[f]; g < m.faceOut[f + 1]; g++) {
               const lt = here[m.gTo[g]];
@@ -46,6 +53,7 @@ export class Tables {
               if (m.gMinLen[g] + v < mn) mn = m.gMinLen[g] + v;
               if (m.gMaxLenAdj[g] + mxL[j] > mx) mx = m.gMaxLenAdj[g] + mxL[j];
               if (m.gMinPrice[g] + mnP[j] < mp) mp = m.gMinPrice[g] + mnP[j];
+              if (mnW && m.gMinWeight[g] + mnW[j] < mw) mw = m.gMinWeight[g] + mnW[j];
             }
           }
           if (leg < S) {
@@ -57,12 +65,14 @@ export class Tables {
               if (mt.len + v < mn) mn = mt.len + v;
               if (mt.len + mt.adj + maxLen[leg + 1][j] > mx) mx = mt.len + mt.adj + maxLen[leg + 1][j];
               if (minPrice[leg + 1][j] < mp) mp = minPrice[leg + 1][j];
+              if (minWeight) mw = Math.min(mw, weightOf(p.stations[mt.station].weightG) + minWeight[leg + 1][j]);
             }
           } else if (k === 0 && f === p.camEntry) {
-            mn = p.camLen; mx = p.camLen + p.camAdj; mp = 0;
+            mn = p.camLen; mx = p.camLen + p.camAdj; mp = 0; mw = weightOf(p.req.camera.weightG);
           }
           const i = li * W + k;
           mnL[i] = mn; mxL[i] = mx; mnP[i] = mp;
+          if (mnW) mnW[i] = mw;
         }
       }
       this.built = k;

@@ -1,76 +1,51 @@
-// A found chain before it is dressed as a Chain, and the bounded list of the best distinct
-// part multisets. Order: fewest parts, smallest |error|, lowest price (unknown last), shortest
-// D, then the multiset key so that ties come out the same every time.
+// The v2 ranking key's comparisons and the bounded list of the best geometries: each held by
+// its best multiset so far. Key: warned, parts, detours, |error|, price (unknown last), D,
+// then the multiset key so that ties come out the same every time.
 
-export type Found = {
-  /** Connector orientation index (>= 0) or a station mount encoded by `stationMove`. */
-  moves: number[];
-  k: number;
-  /** |D − T|, 0 without a target. */
-  err: number;
-  /** Σ prices, Infinity when any is unknown. */
-  price: number;
-  /** D as set. */
-  d: number;
-  msKey: string;
-};
-
-export const stationMove = (station: number, rev: boolean): number => -1 - (station * 2 + (rev ? 1 : 0));
-export const decodeStationMove = (move: number): { station: number; rev: boolean } => {
-  const v = -1 - move;
-  return { station: v >> 1, rev: (v & 1) === 1 };
-};
+import type { Ordered } from "./orderings";
+import type { Bound } from "./walker";
 
 /** Lengths that differ by less than this are equal for ranking (float noise of sums). */
 export const RANK_EPS = 1e-9;
 
-function cmpLen(a: number, b: number): number {
-  return Math.abs(a - b) <= RANK_EPS ? 0 : a < b ? -1 : 1;
+export const cmpLen = (a: number, b: number): number => (Math.abs(a - b) <= RANK_EPS ? 0 : a < b ? -1 : 1);
+/** Prices in cents, Infinity when unknown (so unknown ranks last). */
+export const cmpPrice = (a: number, b: number): number => (a === b ? 0 : a < b ? -1 : 1);
+
+export type Entry = {
+  warned: boolean; k: number; detours: number; err: number; price: number; d: number;
+  msKey: string; geoKey: string; counts: Map<number, number>; ord: Ordered;
+};
+
+export function cmpEntry(a: Entry, b: Entry): number {
+  return (a.warned === b.warned ? 0 : a.warned ? 1 : -1) || a.k - b.k || a.detours - b.detours ||
+    cmpLen(a.err, b.err) || cmpPrice(a.price, b.price) || cmpLen(a.d, b.d) ||
+    (a.msKey < b.msKey ? -1 : a.msKey > b.msKey ? 1 : 0);
 }
 
-function cmpPrice(a: number, b: number): number {
-  return a === b ? 0 : a < b ? -1 : 1;
+/** A relaxed bound (detours taken as 0) against an entry of the same phase and level. */
+export function cmpBound(b: Bound, worst: Entry): number {
+  if (worst.detours > 0) return -1;
+  return cmpLen(b.err, worst.err) || cmpPrice(b.price, worst.price) || cmpLen(b.d, worst.d);
 }
 
-/** Compare by the ranking key only (no multiset tie-break). */
-export function cmpKey(a: Pick<Found, "k" | "err" | "price" | "d">, b: Pick<Found, "k" | "err" | "price" | "d">): number {
-  return a.k - b.k || cmpLen(a.err, b.err) || cmpPrice(a.price, b.price) || cmpLen(a.d, b.d);
-}
-
-export function cmpFound(a: Found, b: Found): number {
-  return cmpKey(a, b) || (a.msKey < b.msKey ? -1 : a.msKey > b.msKey ? 1 : 0);
-}
-
-export class TopK {
-  readonly items: Found[] = [];
-  private readonly keys = new Set<string>();
-
+/** The best `capacity` geometries, each held by its best multiset so far. */
+export class GeoTop {
+  readonly items: Entry[] = [];
+  private readonly byGeo = new Map<string, Entry>();
   constructor(readonly capacity: number) {}
-
-  get full(): boolean {
-    return this.items.length >= this.capacity;
-  }
-
-  get worst(): Found | undefined {
-    return this.items[this.items.length - 1];
-  }
-
-  has(msKey: string): boolean {
-    return this.keys.has(msKey);
-  }
-
-  /** Would a chain with this key (and some multiset) possibly enter? */
-  admits(key: Pick<Found, "k" | "err" | "price" | "d">): boolean {
-    return !this.full || cmpKey(key, this.worst!) <= 0;
-  }
-
-  offer(f: Found): void {
-    if (this.keys.has(f.msKey)) return;
-    if (this.full && cmpFound(f, this.worst!) >= 0) return;
+  get full(): boolean { return this.items.length >= this.capacity; }
+  get worst(): Entry | undefined { return this.items[this.items.length - 1]; }
+  offer(e: Entry): void {
+    const prev = this.byGeo.get(e.geoKey);
+    if (prev) {
+      if (cmpEntry(e, prev) >= 0) return;
+      this.items.splice(this.items.indexOf(prev), 1);
+    } else if (this.full && cmpEntry(e, this.worst!) >= 0) return;
     let i = this.items.length;
-    while (i > 0 && cmpFound(f, this.items[i - 1]) < 0) i--;
-    this.items.splice(i, 0, f);
-    this.keys.add(f.msKey);
-    if (this.items.length > this.capacity) this.keys.delete(this.items.pop()!.msKey);
+    while (i > 0 && cmpEntry(e, this.items[i - 1]) < 0) i--;
+    this.items.splice(i, 0, e);
+    this.byGeo.set(e.geoKey, e);
+    if (this.items.length > this.capacity) this.byGeo.delete(this.items.pop()!.geoKey);
   }
 }

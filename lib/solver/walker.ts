@@ -11,7 +11,8 @@
 import type { Problem, StationMount } from "./problem";
 import type { Reach } from "./reach";
 import type { Tables } from "./tables";
-import { stationMove } from "./topk";
+import { stationMove } from "./moves";
+import { cmpPrice } from "./topk";
 
 /** A relaxed lower bound on the ranking key (|error|, price, D) of any chain through a state. */
 export type Bound = { err: number; price: number; d: number };
@@ -25,9 +26,18 @@ export type Searcher = {
     verdict(b: Bound): "go" | "skip" | "stop";
   };
   complete(dMin: number, dMax: number, price: number, moves: readonly number[], used: Int32Array): void;
-  /** Optional exact-safe pruning on the chain so far (e.g. "certainly warned"); false = prune. */
-  alive?(leg: number, li: number, r: number, moves: readonly number[]): boolean;
+  /**
+   * Optional exact-safe pruning on the chain so far (e.g. "no clean finish"): false prunes the
+   * state; a function is a test every connector orientation that may follow must pass (it
+   * turns children away before they count as states).
+   */
+  enter?(leg: number, li: number, r: number, cmin: number, cadj: number, moves: readonly number[]): KidTest | boolean;
+  /** A relaxation of the searcher's own that is built, like the walker's bitsets, only when a walk proves expensive. */
+  sharpen?: { level(): number; ensure(k: number): void };
 };
+
+/** Whether connector orientation o may follow the state it was made for. */
+export type KidTest = (o: number) => boolean;
 
 const SLACK = 1e-9;
 /**
@@ -76,9 +86,10 @@ export class Walker {
     this.k = k;
     this.t.ensure(k);
     const budget = tuning.walkBudget;
+    const { reach, s } = this;
     for (;;) {
-      const reach = this.reach;
-      this.budget = reach && reach.level < k ? this.spent + budget : Infinity;
+      const lagging = (reach !== null && reach.level < k) || (s.sharpen !== undefined && s.sharpen.level() < k);
+      this.budget = lagging ? this.spent + budget : Infinity;
       this.used.fill(0);
       this.visit.fill(0);
       this.moves.length = 0;
@@ -89,7 +100,8 @@ export class Walker {
       } catch (e) {
         if (e === EXHAUSTED) { p.work.exhausted = true; return; }
         if (e !== ABORT) throw e;
-        reach!.ensure(k);
+        reach?.ensure(k);
+        s.sharpen?.ensure(k);
       }
     }
   }
@@ -110,7 +122,7 @@ export class Walker {
    * same-face spacers only at the first arrival and in orientation order (see above), and
    * only lengths that can still meet the need (binary search on the sorted group).
    */
-  private candidates(leg: number, f: number, cmin: number, cadj: number, r: number, loopMin: number, take: (o: number, to: number, loop: boolean) => void): void {
+  private candidates(leg: number, f: number, cmin: number, cadj: number, r: number, loopMin: number, kidTest: KidTest | null, take: (o: number, to: number, loop: boolean) => void): void {
     const { p, t } = this;
     const m = p.model;
     if (r <= 0 || f >= m.faces.size) return;
@@ -136,7 +148,7 @@ export class Walker {
       if (o < end && lenLo > m.oLen[o]) o = lowerBound(m.oLen, o, end, lenLo);
       for (; o < end && m.oLen[o] <= lenHi; o++) {
         const part = m.oPart[o];
-        if (this.used[part] < m.quantity[part]) take(o, to, loop);
+        if (this.used[part] < m.quantity[part] && (!kidTest || kidTest(o))) take(o, to, loop);
       }
     }
   }
@@ -154,14 +166,16 @@ export class Walker {
     this.tick();
     const r = this.k - u;
     if (!this.viable(leg, li, r, cmin, cadj)) return;
-    if (s.alive && !s.alive(leg, li, r, this.moves)) return;
+    const test = s.enter ? s.enter(leg, li, r, cmin, cadj, this.moves) : true;
+    if (test === false) return;
+    const kidTest = test === true ? null : test;
     if (s.order) {
       if (!s.order.bound(leg, li, r, cmin, cadj, price)) return;
-      this.ordered(leg, f, cmin, cadj, price, u, loopMin);
+      this.ordered(leg, f, cmin, cadj, price, u, loopMin, kidTest);
       return;
     }
 
-    this.candidates(leg, f, cmin, cadj, r, loopMin, (o) => this.step(o, leg, f, cmin, cadj, price, u));
+    this.candidates(leg, f, cmin, cadj, r, loopMin, kidTest, (o) => this.step(o, leg, f, cmin, cadj, price, u));
     if (leg < p.S) {
       for (const mt of p.exits[leg]) if (mt.entry === f) this.station(mt, leg, cmin, cadj, price, u);
     } else if (r === 0 && f === p.camEntry) {
@@ -197,7 +211,7 @@ export class Walker {
    * are tried in bound order and skipped once they cannot beat the current last place.
    * Good chains are found first, so the bound bites early.
    */
-  private ordered(leg: number, f: number, cmin: number, cadj: number, price: number, u: number, loopMin: number): void {
+  private ordered(leg: number, f: number, cmin: number, cadj: number, price: number, u: number, loopMin: number, kidTest: KidTest | null): void {
     const { p, s } = this;
     const m = p.model;
     const r = this.k - u;
@@ -206,7 +220,7 @@ export class Walker {
       s.complete(dMin, dMin + cadj + p.camAdj, price, this.moves, this.used);
     }
     const raw: number[] = [];
-    this.candidates(leg, f, cmin, cadj, r, loopMin, (o) => raw.push(o));
+    this.candidates(leg, f, cmin, cadj, r, loopMin, kidTest, (o) => raw.push(o));
     if (raw.length > tuning.sortLimit) {
       // Too many siblings to bound and sort each: walk them in length order instead.
       for (const o of raw) this.step(o, leg, f, cmin, cadj, price, u);
@@ -225,25 +239,24 @@ export class Walker {
     if (leg < p.S) {
       for (const mt of p.exits[leg]) if (mt.entry === f) consider(stationMove(mt.station, mt.rev), leg + 1, mt.exit, mt.len, mt.adj, 0, u, false);
     }
-    kids.sort((x, y) => x.err - y.err || (x.price === y.price ? 0 : x.price < y.price ? -1 : 1) || x.d - y.d);
+    kids.sort((x, y) => x.err - y.err || cmpPrice(x.price, y.price) || x.d - y.d);
     for (const kid of kids) {
       const verdict = s.order!.verdict(kid);
       if (verdict === "stop") break;
       if (verdict === "skip") continue;
+      // Stock was checked in candidates(): every sibling's walk puts back what it took.
       const part = kid.move >= 0 ? m.oPart[kid.move] : -1;
-      if (part >= 0) {
-        if (this.used[part] >= m.quantity[part]) continue;
-        this.used[part]++;
-      }
+      if (part >= 0) this.used[part]++;
       this.moves.push(kid.move);
-      if (s.alive && !s.alive(kid.leg, p.loc[kid.leg][kid.to], this.k - kid.u, this.moves)) {
+      const test = s.enter ? s.enter(kid.leg, p.loc[kid.leg][kid.to], this.k - kid.u, cmin + kid.len, cadj + kid.adj, this.moves) : true;
+      if (test === false) {
         this.moves.pop();
         if (part >= 0) this.used[part]--;
         continue;
       }
       if (!kid.loop) this.visit[kid.to]++;
       this.tick();
-      this.ordered(kid.leg, kid.to, cmin + kid.len, cadj + kid.adj, price + kid.cost, kid.u, kid.loop ? kid.move : -1);
+      this.ordered(kid.leg, kid.to, cmin + kid.len, cadj + kid.adj, price + kid.cost, kid.u, kid.loop ? kid.move : -1, test === true ? null : test);
       if (!kid.loop) this.visit[kid.to]--;
       this.moves.pop();
       if (part >= 0) this.used[part]--;

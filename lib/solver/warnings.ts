@@ -7,14 +7,26 @@ import type { Chain, ChainWarning, Part } from "./types";
 
 const positive = (x: number | undefined | null): x is number => typeof x === "number" && Number.isFinite(x) && x > 0;
 
-export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]): ChainWarning[] {
-  const { optics, camera } = p.req;
-  const out: ChainWarning[] = [];
-  const N = optics.focalRatio;
-  const s = camera.sensorDiagonalMm;
-  const D = chain.sensorDistanceMm;
+/** The focal ratio and sensor diagonal vignetting is judged with, or null when it is not judged. */
+export function vignettingInputs(p: Problem): { N: number; s: number } | null {
+  const N = p.req.optics.focalRatio, s = p.req.camera.sensorDiagonalMm;
+  return positive(N) && typeof s === "number" && s >= 0 ? { N, s } : null;
+}
 
-  if (positive(N) && typeof s === "number" && s >= 0) {
+/** The most the optics may carry (g), or null when the load is not judged. */
+export function loadLimitG(p: Problem): number | null {
+  const max = p.req.optics.maxLoadG;
+  return typeof max === "number" && Number.isFinite(max) ? max : null;
+}
+
+export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]): ChainWarning[] {
+  const { optics } = p.req;
+  const out: ChainWarning[] = [];
+  const D = chain.sensorDistanceMm;
+  const vig = vignettingInputs(p);
+
+  if (vig) {
+    const { N, s } = vig;
     // The optics' own rear opening (a corrector's last lens cell) is the first stop the cone
     // passes, D from the sensor; N is the system's focal ratio (telescope × corrector factor).
     if (typeof optics.clearApertureMm === "number") {
@@ -44,6 +56,7 @@ export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]):
     });
   }
 
+  const s = p.req.camera.sensorDiagonalMm;
   if (positive(optics.imageCircleMm) && typeof s === "number" && s > optics.imageCircleMm + 1e-9) {
     out.push({
       code: "image-circle",
@@ -55,17 +68,18 @@ export function chainWarnings(p: Problem, chain: Chain, parts: readonly Part[]):
 
   // The load is what hangs from the optics: every step after them. The optics' own weight
   // does not count — they are what carries it.
-  if (typeof optics.maxLoadG === "number" && Number.isFinite(optics.maxLoadG)) {
+  const maxLoad = loadLimitG(p);
+  if (maxLoad !== null) {
     let total = 0, unknown = 0;
     for (const part of parts) {
       if (typeof part.weightG === "number") total += part.weightG;
       else unknown++;
     }
-    if (total > optics.maxLoadG + 1e-9) {
+    if (total > maxLoad + 1e-9) {
       out.push({
         code: "load",
         message: `The train hanging from ${nameOf(optics)} weighs ${unknown ? "at least " : ""}${grams(total)}, ` +
-          `more than the ${grams(optics.maxLoadG)} it is rated to carry.`,
+          `more than the ${grams(maxLoad)} it is rated to carry.`,
       });
     }
   }

@@ -1,6 +1,6 @@
 // lib/optics and lib/units: behaviour at the edges (the published values live in tests/reference).
 import { describe, expect, it } from "vitest";
-import { criticalFocusZoneUm, fieldOfViewDeg, filterShiftMm, focalRatio, inchesToMm, mmToInches, plateScaleArcsecPerPixel,
+import { criticalFocusZoneUm, farthestUnvignettedMm, fieldOfViewDeg, filterShiftMm, focalRatio, inchesToMm, mmToInches, plateScaleArcsecPerPixel,
   requiredClearApertureMm, sensorDiagonal, totalFilterShiftMm } from "@/lib/optics";
 import { formatLength, formatMm } from "@/lib/units";
 
@@ -24,6 +24,14 @@ describe("optics", () => {
   it("grows the critical focus zone with the square of the focal ratio", () => {
     expect(criticalFocusZoneUm(10) / criticalFocusZoneUm(5)).toBeCloseTo(4, 12);
     expect(criticalFocusZoneUm(4, 0.656)).toBeCloseTo(4.88 * 0.656 * 16, 12);
+  });
+
+  it("places a part as far from the sensor as its aperture allows, the inverse of the aperture it needs", () => {
+    // 36 mm clear at f/5 with a 28.3 mm diagonal: (36 − 28.3)·5 = 38.5 mm, and there it needs exactly 36 mm.
+    expect(farthestUnvignettedMm(36, 28.3, 5)).toBeCloseTo(38.5, 12);
+    expect(requiredClearApertureMm(28.3, farthestUnvignettedMm(36, 28.3, 5), 5)).toBeCloseTo(36, 12);
+    expect(farthestUnvignettedMm(20, 28.3, 5)).toBeLessThan(0); // narrower than the sensor: vignettes anywhere
+    expect(() => farthestUnvignettedMm(36, 28.3, 0)).toThrow(RangeError);
   });
 
   it("has the field shrink as focal length grows, and focal ratio as focal / aperture", () => {

@@ -1,7 +1,7 @@
 // The bitset helpers behind the length relaxation, against plain boolean arrays.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { firstSetIn, forEachBit, isEmpty, lastSetIn, orShift, orShiftRange, popcount, setRange } from "@/lib/solver/bitset";
+import { clearAbove, firstSetIn, forEachBit, isEmpty, lastSetIn, orInto, orShift, orShiftRange, popcount, setRange } from "@/lib/solver/bitset";
 
 const WORDS = 5;
 const N = WORDS * 32;
@@ -52,6 +52,17 @@ describe("bitset", () => {
       const seen: number[] = [];
       forEachBit(bits, (b) => seen.push(b));
       expect(seen).toEqual(idx);
+    }));
+  });
+
+  it("clearAbove keeps exactly the bits up to top, and orInto adds one set to another", () => {
+    fc.assert(fc.property(bitsArb, bitsArb, fc.integer({ min: -3, max: N + 40 }), (a, b, top) => {
+      const bits = toBits(a);
+      clearAbove(bits, top);
+      expect(toBools(bits)).toEqual(a.map((v, i) => v && i <= top));
+      const dst = toBits(a);
+      orInto(dst, toBits(b));
+      expect(toBools(dst)).toEqual(a.map((v, i) => v || b[i]));
     }));
   });
 

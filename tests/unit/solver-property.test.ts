@@ -2,13 +2,17 @@
 // contract v2 literally, on small random catalogs: same status, same shortest D, the same
 // solution geometries and their best multisets, the same variants (ties in the full ranking
 // key compared as sets), Chain.detours and warnedness, same nearest distances, every chain sound.
+// TRAINYARD_PROPERTY_TIMES=N runs every property N times as often (with fresh random seeds).
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { solveTrain, type Part, type Port, type SolveRequest, type SolveResult } from "@/lib/solver";
+import { searchTuning } from "@/lib/solver/search";
 import { tuning } from "@/lib/solver/walker";
 import { bruteForce, chainProblems, compareSolutions, enumerateChains, multisetOf, type Oracle, type OracleSolution } from "./support/brute-force";
 
 const IFACES = ["A", "B", "C", "D", "E", "F"];
+const TIMES = Math.max(1, Math.floor(Number(process.env.TRAINYARD_PROPERTY_TIMES ?? 1)));
+const runs = (n: number) => ({ numRuns: n * TIMES });
 
 /** Most faces are the usual female front / male rear, on the first few interfaces. */
 const port = (ifaces: string[], usual: "male" | "female" = "male"): fc.Arbitrary<Port> =>
@@ -240,13 +244,13 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
         expect(disagreements(req, res, oracle)).toEqual([]);
         expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
       }),
-      { numRuns: 800 },
+      runs(800),
     );
     // The generator must actually reach every status, or the comparison proves little.
     for (const s of ["ok", "no-connection", "too-long", "out-of-reach"]) expect(statuses.get(s) ?? 0).toBeGreaterThan(10);
     // And every v2 rule must actually come up.
     for (const f of ["variants", "warned after clean", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
-  }, 60_000);
+  }, 60_000 * TIMES);
 
   it("on catalogs dense with same-face spacers (loops), with ties in price and length", () => {
     const spacerCatalog = fc.record({
@@ -270,7 +274,7 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
       const oracle = bruteForce(req);
       expect(disagreements(req, solveTrain(req), oracle)).toEqual([]);
       expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
-    }), { numRuns: 150 });
+    }), runs(150));
   });
 
   it("on two-thread catalogs full of step rings, narrow and heavy parts and other makers' copies", () => {
@@ -315,7 +319,77 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
       seen("padding dropped", oracle.target === null && enumerateChains(req).some((c) => !oracle.ranked.some((s) => s.multiset === c.multiset)));
       expect(disagreements(req, res, oracle)).toEqual([]);
       expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
-    }), { numRuns: 1500 });
+    }), runs(1500));
     for (const f of ["variants", "warned variant of a clean head", "warned ranks after more parts", "detours", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
-  }, 60_000);
+  }, 60_000 * TIMES);
+
+  it("where the window is full of warned chains and clean ones are rare or absent, exactly and without truncating", () => {
+    // Phase one (clean chains only) once had to walk every level to prove that no clean chain
+    // exists, and stopped with `truncated` after 20,000 states. Here most parts, the station
+    // and the load limit warn at the distances they stand at, and the back focus is aimed at a
+    // real chain. Phase one gets only 2,000 states, not its usual 1,000,000: on these catalogs it
+    // needed at most 805 in two samples of 3,000 runs with clean.ts's pruning, up to 4,931 without.
+    const face = (i: string, g: "male" | "female"): Port => ({ interface: i, gender: g });
+    const kinds = [
+      [face("T", "female"), face("T", "male")], [face("M", "female"), face("M", "male")],
+      [face("T", "female"), face("M", "male")], [face("M", "female"), face("T", "male")],
+    ] as const;
+    const crowded = fc.record({
+      parts: fc.array(fc.record({
+        // Mostly T spacers of a few stock lengths, so that many chains share a length and fill the window.
+        kind: fc.oneof({ arbitrary: fc.constant(0), weight: 3 }, { arbitrary: fc.integer({ min: 1, max: 3 }), weight: 2 }),
+        lengthMm: fc.constantFrom(1, 2, 3, 5),
+        priceCents: optional(fc.constantFrom(100, 200, 300), 0.85),
+        // f/4–5 and a 22–26 mm diagonal need 26–36 mm at 20–40 mm from the sensor: most of these warn somewhere.
+        clearApertureMm: optional(fc.constantFrom(24, 27, 30, 33, 36, 48), 0.85),
+        weightG: optional(fc.constantFrom(20, 150, 300), 0.7), quantity: optional(fc.integer({ min: 1, max: 3 }), 0.25),
+        reversible: fc.boolean(), adjustMm: optional(fc.constantFrom(1, 3), 0.15),
+      }), { minLength: 3, maxLength: 7 }),
+      station: fc.option(fc.record({ lengthMm: fc.constantFrom(5, 9, 12), clearApertureMm: fc.constantFrom(30, 34, 40), weightG: fc.constantFrom(100, 250) }), { nil: undefined }),
+      cameraIface: fc.constantFrom("T", "M"),
+      cameraAperture: fc.constantFrom(30, 40),
+      // Whole-millimetre cameras too, so that an item can stand exactly at its limit ((aperture − diagonal)·N is whole here).
+      cameraLength: fc.constantFrom(6.5, 7, 10),
+      focalRatio: fc.constantFrom(4, 5),
+      sensor: fc.constantFrom(22, 26),
+      opticsAperture: optional(fc.constantFrom(34, 50), 0.4),
+      maxLoadG: optional(fc.constantFrom(450, 700), 0.4),
+      tolerance: fc.constantFrom(0.5, 1, 2),
+      aim: fc.double({ min: 0, max: 1, noNaN: true }), offset: fc.constantFrom(-0.25, 0, 0.25),
+      maxParts: fc.integer({ min: 2, max: 4 }),
+      maxSolutions: fc.integer({ min: 1, max: 4 }),
+    }).map((g): SolveRequest => {
+      const req: SolveRequest = {
+        optics: { id: "o", front: null, rear: face("T", "male"), lengthMm: 0, focalRatio: g.focalRatio, backFocusMm: 0,
+          backFocusToleranceMm: g.tolerance, ...(g.opticsAperture !== undefined ? { clearApertureMm: g.opticsAperture } : {}),
+          ...(g.maxLoadG !== undefined ? { maxLoadG: g.maxLoadG } : {}) },
+        camera: { id: "c", front: face(g.cameraIface, "female"), rear: null, lengthMm: g.cameraLength, sensorDiagonalMm: g.sensor, clearApertureMm: g.cameraAperture, weightG: 200 },
+        stations: g.station ? [{ id: "w", front: face("T", "female"), rear: face("T", "male"), ...g.station }] : [],
+        parts: g.parts.map(({ kind, ...p }, i) => ({ id: `p${i}`, front: kinds[kind][0], rear: kinds[kind][1], ...p })),
+        maxParts: g.maxParts,
+        maxSolutions: g.maxSolutions,
+      };
+      const chains = enumerateChains(req);
+      const chosen = chains[Math.floor(g.aim * chains.length)];
+      req.optics.backFocusMm = chosen ? Math.max(0, chosen.dMin + g.offset) : 30;
+      return req;
+    });
+    const withSmallPhaseOne = <T>(run: () => T): T => {
+      const saved = searchTuning.phaseOneShare;
+      searchTuning.phaseOneShare = 2_000;
+      try { return run(); } finally { searchTuning.phaseOneShare = saved; }
+    };
+    const features = new Map<string, number>();
+    fc.assert(fc.property(crowded, (req) => {
+      const oracle = bruteForce(req);
+      const clean = oracle.ranked.filter((s) => !s.warned).length, warned = oracle.ranked.length - clean;
+      if (oracle.status === "ok" && warned >= 2 && clean === 0) features.set("no clean chain", (features.get("no clean chain") ?? 0) + 1);
+      if (oracle.status === "ok" && clean > 0 && warned >= 2 * clean) features.set("clean chains rare", (features.get("clean chains rare") ?? 0) + 1);
+      for (const res of [withSmallPhaseOne(() => solveTrain(req)), withSmallPhaseOne(() => withBitsetsEverywhere(() => solveTrain(req)))]) {
+        expect(res.truncated).toBeUndefined();
+        expect(disagreements(req, res, oracle)).toEqual([]);
+      }
+    }), runs(600));
+    for (const f of ["no clean chain", "clean chains rare"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(10);
+  }, 60_000 * TIMES);
 });
