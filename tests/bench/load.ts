@@ -2,16 +2,19 @@
 // POST /api/v1/solve (the flagship body), GET /api/v1/parts?limit=50, a public /b/<slug> and /plan.
 // Prints requests/s, p50/p95/p99 latency and errors per target.
 //
-// By default it starts its own database, fakes and `next start` (building when sources changed)
-// with rate limits off (TRAINYARD_RATE_LIMIT=0): this measures capacity, not the limiter.
+// By default it starts its own database, fakes and production server (lib/dev/serve.ts, building
+// when sources changed; TRAINYARD_WORKERS processes, by default one per CPU, as `npm start`) with
+// rate limits off (TRAINYARD_RATE_LIMIT=0): this measures capacity, not the limiter.
 // TRAINYARD_BASE_URL=http://127.0.0.1:3000 measures an app you already run instead.
 // LOAD_CONNECTIONS, LOAD_SECONDS change the load; `--only solve` runs one target.
 import autocannon from "autocannon";
+import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { dropDatabase } from "@/db/server";
 import { buildApp, buildIsStale, serveApp, waitForHealth } from "@/lib/dev/next-process";
 import { freePort, startServices } from "@/lib/dev/services";
+import { workerCount } from "@/lib/dev/worker-count";
 import { seedDemoBuilds } from "@/seed/demo-builds";
 import { seedDemo } from "@/seed/index";
 import { DEMO_CASES } from "@/seed/catalog/index";
@@ -87,7 +90,8 @@ async function main() {
       rows.push(await run(name, opts));
     }
     const ms = (v: number) => `${v.toFixed(0)} ms`;
-    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0), ${base}\n`);
+    const servers = process.env.TRAINYARD_BASE_URL ? "" : `, ${workerCount(process.env, false)} server worker process(es) (TRAINYARD_WORKERS)`;
+    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0)${servers}, ${base}; load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}\n`);
     console.log("| target | req/s | p50 | p95 | p99 | requests | errors | non-2xx |");
     console.log("|---|---:|---:|---:|---:|---:|---:|---:|");
     for (const r of rows) console.log(`| ${r.name} | ${r.rps.toFixed(0)} | ${ms(r.p50)} | ${ms(r.p95)} | ${ms(r.p99)} | ${r.requests} | ${r.errors} | ${r.non2xx} |`);
