@@ -71,6 +71,7 @@ async function main() {
       await services.stop();
     };
   }
+  const loadBefore = os.loadavg()[0];
   try {
     const list = (await (await fetch(`${base}/api/v1/builds?reference=1&limit=1`)).json()) as { items: { slug: string }[] };
     const slug = list.items[0]?.slug;
@@ -91,7 +92,7 @@ async function main() {
     }
     const ms = (v: number) => `${v.toFixed(0)} ms`;
     const servers = process.env.TRAINYARD_BASE_URL ? "" : `, ${workerCount(process.env, false)} server worker process(es) (TRAINYARD_WORKERS)`;
-    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0)${servers}, ${base}; load average ${os.loadavg().map((l) => l.toFixed(2)).join(" ")}\n`);
+    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0)${servers}, ${base}; 1-minute load average ${loadBefore.toFixed(2)} before the runs, ${os.loadavg()[0].toFixed(2)} after\n`);
     console.log("| target | req/s | p50 | p95 | p99 | requests | errors | non-2xx |");
     console.log("|---|---:|---:|---:|---:|---:|---:|---:|");
     for (const r of rows) console.log(`| ${r.name} | ${r.rps.toFixed(0)} | ${ms(r.p50)} | ${ms(r.p95)} | ${ms(r.p99)} | ${r.requests} | ${r.errors} | ${r.non2xx} |`);
