@@ -58,8 +58,13 @@ export async function listAllApprovedParts() {
   return db.select().from(parts).where(eq(parts.status, "approved")).orderBy(asc(parts.slug));
 }
 
+// Asked on every catalog plan (its cache key), so it is a named prepared statement: built once
+// per process, parsed once per connection. Made on first use (`next build` has no database).
+let catalogVersionQuery: { execute: () => Promise<{ version: number }[]> } | undefined;
+
 export async function getCatalogVersion(): Promise<number> {
-  const [row] = await db.select({ version: catalogState.version }).from(catalogState).where(eq(catalogState.id, 1));
+  catalogVersionQuery ??= db.select({ version: catalogState.version }).from(catalogState).where(eq(catalogState.id, 1)).prepare("catalog_version");
+  const [row] = await catalogVersionQuery.execute();
   return row?.version ?? 0;
 }
 

@@ -56,7 +56,11 @@ if (!process.env.TRAINYARD_UNIT_ONLY) {
     await seedDemo(services.databaseUrl);
     // Limits off for the general suite (tests/integration/limits.test.ts starts its own
     // instances with them on); a large upload quota so that no suite trips over it.
-    const env = { ...process.env, ...services.env, TRAINYARD_RATE_LIMIT: "0", TRAINYARD_UPLOADS_PER_DAY: "100000", TRAINYARD_TEST_RUNNER: "1" };
+    // Two server processes (lib/dev/serve.ts), as `npm start` runs on a 2-CPU machine, so that
+    // the suite's requests are spread over both and the instances the fault and limit tests
+    // start are clusters too; TRAINYARD_WORKERS=1 tests a single process.
+    const env = { ...process.env, ...services.env, TRAINYARD_RATE_LIMIT: "0", TRAINYARD_UPLOADS_PER_DAY: "100000", TRAINYARD_TEST_RUNNER: "1",
+      TRAINYARD_WORKERS: process.env.TRAINYARD_WORKERS ?? "2" };
     if (!process.env.TRAINYARD_SKIP_BUILD) buildApp(root, env);
     app = serveApp(root, { port: appPort, dev: false, env, quiet: true });
     let appLog = "";

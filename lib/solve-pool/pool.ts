@@ -1,6 +1,7 @@
 import "server-only";
 // Heavy solves run in a small pool of worker threads (piscina) with a time budget, so one
 // client's huge inline request cannot stall every other request on the main thread.
+import os from "node:os";
 import path from "node:path";
 import { Piscina } from "piscina";
 import { AppError } from "@/lib/errors";
@@ -15,12 +16,21 @@ export const SOLVE_BUDGET_MS = 5_000;
 /** Beyond this many waiting solves, new ones are turned away (503) rather than queued. */
 const MAX_QUEUE = 4;
 
+/**
+ * Threads per process: the CPUs shared among the server processes (lib/dev/serve.ts runs
+ * TRAINYARD_SERVER_PROCESSES of them), at most 2, at least 1, so that N processes never start more
+ * solve threads than the machine has CPUs (beyond the one a single process always gets).
+ */
+export function solveThreads(cpus = os.availableParallelism(), processes = Number(process.env.TRAINYARD_SERVER_PROCESSES) || 1): number {
+  return Math.max(1, Math.min(2, Math.floor(cpus / Math.max(1, processes))));
+}
+
 const globalForPool = globalThis as unknown as { trainyardSolvePool?: Piscina };
 
 function pool(): Piscina {
   globalForPool.trainyardSolvePool ??= new Piscina({
     filename: path.join(process.cwd(), process.env.NEXT_DIST_DIR ?? ".next", "solve-worker.mjs"),
-    minThreads: 1, maxThreads: 2, maxQueue: MAX_QUEUE, idleTimeout: 60_000,
+    minThreads: 1, maxThreads: solveThreads(), maxQueue: MAX_QUEUE, idleTimeout: 60_000,
   });
   return globalForPool.trainyardSolvePool;
 }

@@ -2,16 +2,19 @@
 // POST /api/v1/solve (the flagship body), GET /api/v1/parts?limit=50, a public /b/<slug> and /plan.
 // Prints requests/s, p50/p95/p99 latency and errors per target.
 //
-// By default it starts its own database, fakes and `next start` (building when sources changed)
-// with rate limits off (TRAINYARD_RATE_LIMIT=0): this measures capacity, not the limiter.
+// By default it starts its own database, fakes and production server (lib/dev/serve.ts, building
+// when sources changed; TRAINYARD_WORKERS processes, by default one per CPU, as `npm start`) with
+// rate limits off (TRAINYARD_RATE_LIMIT=0): this measures capacity, not the limiter.
 // TRAINYARD_BASE_URL=http://127.0.0.1:3000 measures an app you already run instead.
 // LOAD_CONNECTIONS, LOAD_SECONDS change the load; `--only solve` runs one target.
 import autocannon from "autocannon";
+import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { dropDatabase } from "@/db/server";
 import { buildApp, buildIsStale, serveApp, waitForHealth } from "@/lib/dev/next-process";
 import { freePort, startServices } from "@/lib/dev/services";
+import { workerCount } from "@/lib/dev/worker-count";
 import { seedDemoBuilds } from "@/seed/demo-builds";
 import { seedDemo } from "@/seed/index";
 import { DEMO_CASES } from "@/seed/catalog/index";
@@ -68,6 +71,7 @@ async function main() {
       await services.stop();
     };
   }
+  const loadBefore = os.loadavg()[0];
   try {
     const list = (await (await fetch(`${base}/api/v1/builds?reference=1&limit=1`)).json()) as { items: { slug: string }[] };
     const slug = list.items[0]?.slug;
@@ -87,7 +91,8 @@ async function main() {
       rows.push(await run(name, opts));
     }
     const ms = (v: number) => `${v.toFixed(0)} ms`;
-    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0), ${base}\n`);
+    const servers = process.env.TRAINYARD_BASE_URL ? "" : `, ${workerCount(process.env, false)} server worker process(es) (TRAINYARD_WORKERS)`;
+    console.log(`\n${CONNECTIONS} connections × ${SECONDS} s per target, rate limits off (TRAINYARD_RATE_LIMIT=0)${servers}, ${base}; 1-minute load average ${loadBefore.toFixed(2)} before the runs, ${os.loadavg()[0].toFixed(2)} after\n`);
     console.log("| target | req/s | p50 | p95 | p99 | requests | errors | non-2xx |");
     console.log("|---|---:|---:|---:|---:|---:|---:|---:|");
     for (const r of rows) console.log(`| ${r.name} | ${r.rps.toFixed(0)} | ${ms(r.p50)} | ${ms(r.p95)} | ${ms(r.p99)} | ${r.requests} | ${r.errors} | ${r.non2xx} |`);
