@@ -248,8 +248,10 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
     );
     // The generator must actually reach every status, or the comparison proves little.
     for (const s of ["ok", "no-connection", "too-long", "out-of-reach"]) expect(statuses.get(s) ?? 0).toBeGreaterThan(10);
-    // And every v2 rule must actually come up.
-    for (const f of ["variants", "warned after clean", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
+    // And every v2 rule must actually come up. The counts move with fast-check's random seed
+    // (over eight seeds: "warned after clean" 8–19 of 800, the others 55 and more), so the bar
+    // is "more than once", not a share: above 5 failed about one run in twenty.
+    for (const f of ["variants", "warned after clean", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(1);
   }, 60_000 * TIMES);
 
   it("on catalogs dense with same-face spacers (loops), with ties in price and length", () => {
@@ -320,7 +322,9 @@ describe("solveTrain agrees with a brute-force enumerator", () => {
       expect(disagreements(req, res, oracle)).toEqual([]);
       expect(disagreements(req, withBitsetsEverywhere(() => solveTrain(req)), oracle)).toEqual([]);
     }), runs(1500));
-    for (const f of ["variants", "warned variant of a clean head", "warned ranks after more parts", "detours", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(5);
+    // Seed-dependent counts as above (eight seeds: "warned ranks after more parts" 8–17 of 1,500,
+    // "warned variant of a clean head" 8–27, the others 41 and more): every rule more than once.
+    for (const f of ["variants", "warned variant of a clean head", "warned ranks after more parts", "detours", "padding dropped"]) expect(features.get(f) ?? 0, f).toBeGreaterThan(1);
   }, 60_000 * TIMES);
 
   it("where the window is full of warned chains and clean ones are rare or absent, exactly and without truncating", () => {
