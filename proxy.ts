@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { contentSecurityPolicy, HSTS } from "@/lib/http/security-headers";
 import { isMalformedPath, malformedPathResponse } from "@/lib/malformed-path";
+import { PAGE_PATH_HEADER } from "@/lib/page-path";
 
 const PRIVATE = [/^\/account(\/|$)/, /^\/review(\/|$)/, /^\/parts\/submit$/];
 
@@ -25,6 +26,8 @@ export function proxy(request: NextRequest) {
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set("x-nonce", nonce);
   requestHeaders.set("content-security-policy", csp);
+  // The page's own path, for a layout that sends a stale session to sign in and back here (lib/signed-in).
+  requestHeaders.set(PAGE_PATH_HEADER, pathname);
   const response = NextResponse.next({ request: { headers: requestHeaders } });
   response.headers.set("content-security-policy", csp);
   // X-Forwarded-Proto survives only from a trusted proxy (lib/dev/serve.ts).
