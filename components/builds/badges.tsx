@@ -25,3 +25,15 @@ export function FitBadge({ fits }: { fits: boolean }) {
 export function HiddenBadge() {
   return <span className="inline-flex items-center gap-1 rounded-full border border-dashed border-warn px-2.5 py-0.5 text-xs font-semibold text-warn"><span aria-hidden>⊘</span>Hidden</span>;
 }
+
+/** The full row of a build's labels, as its page and the review queue show it. */
+export function BuildBadges({ endorsed, fits, visibility, hidden, className = "gap-2" }: { endorsed: boolean; fits: boolean; visibility: string; hidden: boolean; className?: string }) {
+  return (
+    <div className={`flex flex-wrap items-center ${className}`}>
+      {endorsed ? <ReferenceBadge /> : null}
+      <FitBadge fits={fits} />
+      <VisibilityBadge visibility={visibility} />
+      {hidden ? <HiddenBadge /> : null}
+    </div>
+  );
+}

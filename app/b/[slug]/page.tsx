@@ -3,7 +3,8 @@ import { headers } from "next/headers";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AuditLog } from "@/components/builds/audit-log";
-import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "@/components/builds/badges";
+import { BuildBadges } from "@/components/builds/badges";
+import { formatDay } from "@/lib/format";
 import { BuildFacts } from "@/components/builds/build-facts";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { QuoteRequestPanel } from "@/components/orders/quote-request-panel";
@@ -29,7 +30,6 @@ import type { BuildVisibility } from "@/lib/validation/builds";
 export const dynamic = "force-dynamic";
 type Props = { params: Promise<{ slug: string }> };
 
-const day = (d: Date) => d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { slug } = await params;
@@ -84,23 +84,18 @@ export default async function BuildPage({ params }: Props) {
       {!build.fits ? (
         <div role="alert" className="rounded-lg border border-bad/50 bg-bad/10 px-4 py-3 text-sm">
           <strong className="text-bad">No longer fits.</strong> A catalog part this build uses has changed. {build.checkReason}
-          <span className="text-muted"> Checked {day(build.checkedAt)}.</span>
+          <span className="text-muted"> Checked {formatDay(build.checkedAt)}.</span>
         </div>
       ) : null}
 
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div className="min-w-0 space-y-2">
-          <div className="flex flex-wrap items-center gap-2">
-            {build.endorsedAt ? <ReferenceBadge /> : null}
-            <FitBadge fits={build.fits} />
-            <VisibilityBadge visibility={build.visibility} />
-            {build.hiddenAt ? <HiddenBadge /> : null}
-          </div>
+          <BuildBadges endorsed={!!build.endorsedAt} fits={build.fits} visibility={build.visibility} hidden={!!build.hiddenAt} />
           <h1 className="break-words text-2xl font-semibold tracking-tight text-ink sm:text-3xl">{build.title}</h1>
           <p className="text-sm text-muted">
-            Saved by {ownerName} on {day(build.createdAt)}
-            {build.endorsedAt ? <> · endorsed{endorserName ? ` by ${endorserName}` : ""} on {day(build.endorsedAt)}</> : null}
-            {build.fits ? <> · re-checked {day(build.checkedAt)}</> : null}
+            Saved by {ownerName} on {formatDay(build.createdAt)}
+            {build.endorsedAt ? <> · endorsed{endorserName ? ` by ${endorserName}` : ""} on {formatDay(build.endorsedAt)}</> : null}
+            {build.fits ? <> · re-checked {formatDay(build.checkedAt)}</> : null}
           </p>
         </div>
         <ButtonLink href={planHrefOf(build.request as PlanInput, result, build.solutionIndex)} variant="secondary">Open in planner</ButtonLink>

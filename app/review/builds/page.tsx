@@ -1,7 +1,7 @@
 import { headers } from "next/headers";
 import Link from "next/link";
 import { listReviewQueue } from "@/db/queries/builds";
-import { FitBadge, HiddenBadge, ReferenceBadge, VisibilityBadge } from "@/components/builds/badges";
+import { BuildBadges } from "@/components/builds/badges";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { PageTitle } from "@/components/ui/card";
 import { allowed } from "@/lib/auth/session";
@@ -18,12 +18,7 @@ function Row({ row, origin }: { row: BuildListRow; origin: string }) {
   return (
     <li className={`grid gap-4 rounded-lg border bg-surface p-4 md:grid-cols-[minmax(0,1fr)_26rem] ${!b.fits && b.endorsed ? "border-bad/50" : "border-line"}`}>
       <div className="min-w-0 space-y-1.5 text-sm">
-        <div className="flex flex-wrap items-center gap-1.5">
-          {b.endorsed ? <ReferenceBadge /> : null}
-          <FitBadge fits={b.fits} />
-          <VisibilityBadge visibility={b.visibility} />
-          {b.hidden ? <HiddenBadge /> : null}
-        </div>
+        <BuildBadges endorsed={b.endorsed} fits={b.fits} visibility={b.visibility} hidden={b.hidden} className="gap-1.5" />
         <h2 className="text-base font-semibold text-ink"><Link href={`/b/${b.slug}`} className="underline-offset-4 hover:underline">{b.title}</Link></h2>
         <p className="text-muted">{[b.telescope, b.optics].filter(Boolean).join(" + ")}{b.stations.length ? ` → ${b.stations.join(" → ")}` : ""} → {b.camera} · {b.owner.name} · {formatDay(b.createdAt)}</p>
         <p className="num">Sensor at {b.sensorDistanceMm?.toFixed(2) ?? "—"} mm{b.targetMm !== null ? ` for ${b.targetMm.toFixed(2)} ± ${(b.toleranceMm ?? 0).toFixed(2)} mm` : ""} · {b.partCount ?? "—"} connecting parts</p>
