@@ -12,9 +12,13 @@ describe("workerCount", () => {
     expect(workerCount({ TRAINYARD_WORKERS: "3" }, false)).toBe(3);
     expect(workerCount({ TRAINYARD_WORKERS: " 1 " }, false)).toBe(1);
   });
-  it("defaults to one per CPU the machine offers", () => {
-    expect(workerCount({}, false)).toBe(os.availableParallelism());
-    expect(workerCount({ TRAINYARD_WORKERS: "" }, false)).toBe(os.availableParallelism());
+  it("defaults to one per CPU the machine offers, at most 4 (PostgreSQL connections)", () => {
+    expect(workerCount({}, false)).toBe(Math.min(os.availableParallelism(), 4));
+    expect(workerCount({ TRAINYARD_WORKERS: "" }, false, 2)).toBe(2);
+    expect(workerCount({}, false, 1)).toBe(1);
+    expect(workerCount({}, false, 4)).toBe(4);
+    expect(workerCount({}, false, 64)).toBe(4);
+    expect(workerCount({ TRAINYARD_WORKERS: "6" }, false, 64)).toBe(6);
   });
   it("refuses a value that is not a whole number of at least 1", () => {
     for (const bad of ["0", "-2", "1.5", "two"]) expect(() => workerCount({ TRAINYARD_WORKERS: bad }, false)).toThrow(/TRAINYARD_WORKERS/);
