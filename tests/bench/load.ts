@@ -3,7 +3,7 @@
 // Prints requests/s, p50/p95/p99 latency and errors per target.
 //
 // By default it starts its own database, fakes and production server (lib/dev/serve.ts, building
-// when sources changed; TRAINYARD_WORKERS processes, by default one per CPU, as `npm start`) with
+// when sources changed; TRAINYARD_WORKERS processes, by default one per CPU up to 4, as `npm start`) with
 // rate limits off (TRAINYARD_RATE_LIMIT=0): this measures capacity, not the limiter.
 // TRAINYARD_BASE_URL=http://127.0.0.1:3000 measures an app you already run instead.
 // LOAD_CONNECTIONS, LOAD_SECONDS change the load; `--only solve` runs one target.

@@ -4,7 +4,6 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AuditLog } from "@/components/builds/audit-log";
 import { BuildBadges } from "@/components/builds/badges";
-import { formatDay } from "@/lib/format";
 import { BuildFacts } from "@/components/builds/build-facts";
 import { ModerationPanel } from "@/components/builds/moderation-panel";
 import { QuoteRequestPanel } from "@/components/orders/quote-request-panel";
@@ -23,13 +22,13 @@ import { planHrefOf } from "@/lib/builds/plan-href";
 import { buildImageUrl, buildUrl, siteOrigin } from "@/lib/builds/site-url";
 import { htmlSnippet, markdownSnippet } from "@/lib/builds/snippets";
 import { buildTrainOf } from "@/lib/builds/train";
+import { formatDay } from "@/lib/format";
 import type { PlanResponse } from "@/lib/planner/api-types";
 import type { PlanInput } from "@/lib/planner/run-plan";
 import type { BuildVisibility } from "@/lib/validation/builds";
 
 export const dynamic = "force-dynamic";
 type Props = { params: Promise<{ slug: string }> };
-
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
   const { slug } = await params;
